@@ -1,0 +1,8 @@
+#!/usr/bin/env bash
+# `npm start` (and `npm run dev` with --dev): installs what is missing, then hands over to scripts/start.ts.
+set -euo pipefail
+cd "$(dirname "${BASH_SOURCE[0]}")/.."
+# shellcheck source=scripts/ensure-system.sh
+source scripts/ensure-system.sh
+export NEXT_TELEMETRY_DISABLED=1
+exec node_modules/.bin/tsx scripts/start.ts "$@"
