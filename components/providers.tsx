@@ -1,0 +1,16 @@
+"use client";
+
+import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
+import { useState, type ReactNode } from "react";
+import { Toaster } from "sonner";
+
+/** The one TanStack Query provider (root layout) and the toast outlet. */
+export function Providers({ children }: { children: ReactNode }) {
+  const [client] = useState(() => new QueryClient({ defaultOptions: { queries: { staleTime: 30_000, retry: 1, refetchOnWindowFocus: false } } }));
+  return (
+    <QueryClientProvider client={client}>
+      {children}
+      <Toaster position="bottom-right" toastOptions={{ className: "font-sans" }} />
+    </QueryClientProvider>
+  );
+}

@@ -1,0 +1,7 @@
+import type { Migration } from "kysely";
+import * as foundation from "./2026-12-01T19-00-foundation";
+
+/** Every migration, by name (timestamp first). Imported statically so that Next can bundle them. */
+export const migrations: Record<string, Migration> = {
+  "2026-12-01T19-00-foundation": foundation,
+};

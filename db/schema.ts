@@ -1,0 +1,122 @@
+import type { ColumnType, Generated, Insertable, Selectable, Updateable } from "kysely";
+
+/** Columns the database fills in (defaults) but that may be given on insert. */
+type Defaulted<T> = ColumnType<T, T | undefined, T>;
+type Timestamp = ColumnType<Date, Date | string | undefined, Date | string>;
+
+export type Role = "owner" | "engineer" | "builder" | "client";
+export type UnitSystem = "metric" | "imperial";
+export type ProjectStatus = "survey" | "design" | "build" | "delivered" | "closed";
+
+export interface FirmsTable {
+  id: Generated<string>;
+  name: string;
+  contact_email: string | null;
+  created_at: Timestamp;
+}
+
+export interface UsersTable {
+  id: string;
+  firm_id: string;
+  email: string;
+  name: string;
+  role: Role;
+  password_hash: string | null;
+  unit_system: Defaulted<UnitSystem>;
+  active: Defaulted<boolean>;
+  created_at: Timestamp;
+}
+
+export interface UserSessionsTable {
+  id: string;
+  user_id: string;
+  expires_at: Date;
+}
+
+export interface AuthTokensTable {
+  token_hash: string;
+  purpose: "password-reset" | "invitation";
+  user_id: string;
+  expires_at: Date;
+  used_at: Date | null;
+  created_at: Timestamp;
+}
+
+export interface LoginAttemptsTable {
+  id: Generated<number>;
+  key: string;
+  succeeded: boolean;
+  attempted_at: Timestamp;
+}
+
+export interface ProjectsTable {
+  id: Generated<string>;
+  firm_id: string;
+  name: string;
+  client_name: string;
+  client_user_id: string | null;
+  site_address: Defaulted<string>;
+  status: Defaulted<ProjectStatus>;
+  notes: Defaulted<string>;
+  version: Defaulted<number>;
+  created_by: string | null;
+  created_at: Timestamp;
+  updated_at: Timestamp;
+}
+
+export interface ProjectBuildersTable {
+  project_id: string;
+  user_id: string;
+}
+
+export interface RoomsTable {
+  id: Generated<string>;
+  project_id: string;
+  name: string;
+  length_m: number;
+  width_m: number;
+  height_m: number;
+  temperature_c: Defaulted<number>;
+  humidity_pct: Defaulted<number>;
+  notes: Defaulted<string>;
+  version: Defaulted<number>;
+  created_at: Timestamp;
+  updated_at: Timestamp;
+}
+
+export interface DevOutboxTable {
+  id: Generated<number>;
+  received_at: Timestamp;
+  envelope_from: string | null;
+  envelope_to: string[];
+  subject: string | null;
+  text_body: string | null;
+  html_body: string | null;
+  raw: string;
+  attachments: ColumnType<{ filename: string | null; contentType: string; size: number }[], string | undefined, string>;
+}
+
+export interface DemoSeedTable {
+  id: number;
+  seeded_at: Timestamp;
+}
+
+export interface Database {
+  firms: FirmsTable;
+  users: UsersTable;
+  user_sessions: UserSessionsTable;
+  auth_tokens: AuthTokensTable;
+  login_attempts: LoginAttemptsTable;
+  projects: ProjectsTable;
+  project_builders: ProjectBuildersTable;
+  rooms: RoomsTable;
+  dev_outbox: DevOutboxTable;
+  demo_seed: DemoSeedTable;
+}
+
+export type UserRow = Selectable<UsersTable>;
+export type NewUser = Insertable<UsersTable>;
+export type ProjectRow = Selectable<ProjectsTable>;
+export type ProjectUpdate = Updateable<ProjectsTable>;
+export type RoomRow = Selectable<RoomsTable>;
+export type FirmRow = Selectable<FirmsTable>;

@@ -1,0 +1,97 @@
+import { z } from "zod";
+import { inviteSchema, memberUpdateSchema } from "@/lib/schemas/member";
+import { projectInputSchema, projectUpdateSchema } from "@/lib/schemas/project";
+import { roomInputSchema, roomUpdateSchema } from "@/lib/schemas/room";
+
+type Method = "get" | "post" | "patch" | "delete";
+
+/** One documented endpoint. Request bodies are the same zod schemas the handlers parse. */
+export interface EndpointDoc {
+  method: Method;
+  path: string;
+  summary: string;
+  tag: string;
+  body?: z.ZodType;
+  success: number;
+  public?: boolean;
+}
+
+const ENDPOINTS: EndpointDoc[] = [
+  { method: "get", path: "/me", summary: "The signed-in user", tag: "Account", success: 200 },
+  { method: "get", path: "/projects", summary: "Projects the caller may see", tag: "Projects", success: 200 },
+  { method: "post", path: "/projects", summary: "Create a project (owner, engineer)", tag: "Projects", body: projectInputSchema, success: 201 },
+  { method: "get", path: "/projects/{projectId}", summary: "One project", tag: "Projects", success: 200 },
+  { method: "patch", path: "/projects/{projectId}", summary: "Update a project (optimistic: send the version you read)", tag: "Projects", body: projectUpdateSchema, success: 200 },
+  { method: "delete", path: "/projects/{projectId}", summary: "Delete a project and its rooms", tag: "Projects", success: 204 },
+  { method: "get", path: "/projects/{projectId}/rooms", summary: "Rooms of a project", tag: "Rooms", success: 200 },
+  { method: "post", path: "/projects/{projectId}/rooms", summary: "Create a room (SI units)", tag: "Rooms", body: roomInputSchema, success: 201 },
+  { method: "get", path: "/rooms/{roomId}", summary: "One room", tag: "Rooms", success: 200 },
+  { method: "patch", path: "/rooms/{roomId}", summary: "Update a room (optimistic: send the version you read)", tag: "Rooms", body: roomUpdateSchema, success: 200 },
+  { method: "delete", path: "/rooms/{roomId}", summary: "Delete a room", tag: "Rooms", success: 204 },
+  { method: "get", path: "/members", summary: "Members of the caller's firm (owner, engineer)", tag: "Team", success: 200 },
+  { method: "post", path: "/members", summary: "Invite a member by e-mail (owner)", tag: "Team", body: inviteSchema, success: 201 },
+  { method: "patch", path: "/members/{userId}", summary: "Change a member's role or deactivate them (owner)", tag: "Team", body: memberUpdateSchema, success: 200 },
+  { method: "get", path: "/openapi.json", summary: "This document", tag: "Meta", success: 200, public: true },
+];
+
+const endpoints: EndpointDoc[] = [...ENDPOINTS];
+
+/** Computation modules add their endpoints here (see lib/api/openapi-engines.ts). */
+export function documentEndpoints(more: EndpointDoc[]): void {
+  for (const e of more) if (!endpoints.some((x) => x.method === e.method && x.path === e.path)) endpoints.push(e);
+}
+
+const errorSchema = {
+  type: "object",
+  required: ["error"],
+  properties: {
+    error: {
+      type: "object",
+      required: ["code", "message"],
+      properties: {
+        code: { type: "string", enum: ["bad_request", "unauthorized", "forbidden", "not_found", "conflict", "payload_too_large", "unsupported_media_type", "rate_limited", "internal"] },
+        message: { type: "string" },
+        fields: { type: "object", additionalProperties: { type: "array", items: { type: "string" } }, description: "Field path → messages" },
+      },
+    },
+  },
+};
+
+function jsonSchema(schema: z.ZodType): unknown {
+  const { $schema: _drop, ...rest } = z.toJSONSchema(schema, { io: "input", unrepresentable: "any" }) as Record<string, unknown>;
+  return rest;
+}
+
+/** The OpenAPI 3.1 document of /api/v1, generated from the handlers' zod schemas. */
+export function openApiDocument(): Record<string, unknown> {
+  const paths: Record<string, Record<string, unknown>> = {};
+  for (const e of endpoints) {
+    const params = [...e.path.matchAll(/\{(\w+)\}/g)].map((m) => ({ name: m[1], in: "path", required: true, schema: { type: "string" } }));
+    const errors = {
+      "400": { description: "Invalid input; `fields` names each failing field", content: { "application/json": { schema: { $ref: "#/components/schemas/Error" } } } },
+      ...(e.public ? {} : { "401": { description: "Not signed in", content: { "application/json": { schema: { $ref: "#/components/schemas/Error" } } } } }),
+      "403": { description: "Signed in, but the role does not allow it" },
+      "404": { description: "Not found, or not visible to the caller" },
+      ...(e.method === "patch" ? { "409": { description: "Stale version: someone else changed it" } } : {}),
+    };
+    (paths[e.path] ??= {})[e.method] = {
+      summary: e.summary,
+      tags: [e.tag],
+      ...(params.length > 0 && { parameters: params }),
+      ...(e.body && { requestBody: { required: true, content: { "application/json": { schema: jsonSchema(e.body) } } } }),
+      responses: { [String(e.success)]: { description: e.success === 204 ? "Done, no body" : "OK" }, ...errors },
+      ...(e.public ? { security: [] } : {}),
+    };
+  }
+  return {
+    openapi: "3.1.0",
+    info: { title: "Eigenroom API", version: "1", description: "JSON API of Eigenroom. Errors are `{ error: { code, message, fields? } }`. SI units throughout." },
+    servers: [{ url: "/api/v1" }],
+    components: {
+      schemas: { Error: errorSchema },
+      securitySchemes: { session: { type: "apiKey", in: "cookie", name: "eigenroom_session" } },
+    },
+    security: [{ session: [] }],
+    paths,
+  };
+}

@@ -1,0 +1,88 @@
+import type { Role } from "@/db/schema";
+import type { Actor } from "./actor";
+
+/**
+ * Every permission decision of Eigenroom lives here. Pages, server actions and route handlers ask
+ * these functions; none of them decides on its own.
+ *
+ * Visibility of a project is decided in the query (db/queries/projects.ts `projectScope`) from the
+ * same rules written below in `canSeeProject`, so that a project an actor may not see is simply not
+ * found (404), never "forbidden" (which would confirm that it exists).
+ */
+
+/** Firm-wide actions, not tied to one project. */
+export type FirmAction =
+  | "project.list"
+  | "project.create"
+  | "member.list"
+  | "member.manage"
+  | "outbox.read"
+  | "engine.run";
+
+/** Actions on one project (and the rooms and analyses inside it). */
+export type ProjectAction =
+  | "project.read"
+  | "project.update"
+  | "project.delete"
+  | "room.read"
+  | "room.create"
+  | "room.update"
+  | "room.delete"
+  | "build.read"
+  | "build.mark-done";
+
+const FIRM_ACTIONS: Record<Role, readonly FirmAction[]> = {
+  owner: ["project.list", "project.create", "member.list", "member.manage", "outbox.read", "engine.run"],
+  engineer: ["project.list", "project.create", "member.list", "engine.run"],
+  builder: ["project.list", "engine.run"],
+  client: ["project.list", "engine.run"],
+};
+
+/** May the actor do this firm-wide action? */
+export function canInFirm(actor: Actor, action: FirmAction): boolean {
+  return FIRM_ACTIONS[actor.role].includes(action);
+}
+
+/** The facts about a project that permissions depend on. */
+export interface ProjectFacts {
+  firmId: string;
+  clientUserId: string | null;
+  builderIds: readonly string[];
+}
+
+/** Whether the actor may know the project exists at all. */
+export function canSeeProject(actor: Actor, project: ProjectFacts): boolean {
+  if (project.firmId !== actor.firmId) return false;
+  switch (actor.role) {
+    case "owner":
+    case "engineer":
+      return true;
+    case "builder":
+      return project.builderIds.includes(actor.userId);
+    case "client":
+      return project.clientUserId === actor.userId;
+  }
+}
+
+const PROJECT_ACTIONS: Record<Role, readonly ProjectAction[]> = {
+  owner: ["project.read", "project.update", "project.delete", "room.read", "room.create", "room.update", "room.delete", "build.read", "build.mark-done"],
+  engineer: ["project.read", "project.update", "project.delete", "room.read", "room.create", "room.update", "room.delete", "build.read"],
+  builder: ["project.read", "room.read", "build.read", "build.mark-done"],
+  client: ["project.read", "room.read"],
+};
+
+/** May the actor do this to the project? False whenever the project is not visible to them. */
+export function canOnProject(actor: Actor, action: ProjectAction, project: ProjectFacts): boolean {
+  return canSeeProject(actor, project) && PROJECT_ACTIONS[actor.role].includes(action);
+}
+
+/** Roles an owner may give when inviting or changing a member. */
+export const ASSIGNABLE_ROLES: readonly Role[] = ["owner", "engineer", "builder", "client"];
+
+/** The navigation a role sees (the server decides; the layout only renders it). */
+export function navigationFor(actor: Actor): { href: string; label: string }[] {
+  const items = [{ href: "/projects", label: actor.role === "client" ? "My projects" : actor.role === "builder" ? "My jobs" : "Projects" }];
+  if (canInFirm(actor, "member.list")) items.push({ href: "/members", label: "Team" });
+  if (canInFirm(actor, "outbox.read")) items.push({ href: "/dev/outbox", label: "Outbox" });
+  return items;
+}
