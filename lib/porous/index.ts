@@ -6,3 +6,34 @@ export { MIKI_COEFFICIENTS, MIKI_RANGE, miki } from "./miki";
 export { gaussLegendre, type QuadratureRule } from "./gauss-legendre";
 export { ANGLE_NODES, FIELD_INCIDENCE_MAX_DEG, fieldIncidenceAverage, parisRandomIncidence } from "./incidence";
 export { absorptionSpectrum, type SpectrumOptions } from "./absorption-spectrum";
+export {
+  ISO11654_OCTAVES_HZ,
+  ISO11654_REFERENCE_CURVE,
+  practicalAbsorption,
+  weightedAbsorption,
+  type AbsorptionClass,
+  type WeightedAbsorption,
+} from "./iso11654";
+export { astmC423Ratings, noiseReductionCoefficient, soundAbsorptionAverage } from "./astm-c423";
+export {
+  RATING_EXACT_HZ,
+  RATING_NOMINAL_HZ,
+  rateLayers,
+  rateThirdOctaves,
+  ratingThirdOctaves,
+  type AbsorberRating,
+  type RatingBand,
+} from "./rating-bands";
+export { resistivityFromFibres, sheetFlowResistance } from "./resistivity";
+export { POROUS_MATERIALS, porousMaterial, type PorousMaterial } from "./materials";
+export {
+  helmholtzResonanceHz,
+  membraneAbsorberEstimate,
+  membraneResonanceHz,
+  perforatedPanelAbsorberEstimate,
+  perforatedPanelResonanceHz,
+  perforationEffectiveLengthM,
+  resonatorAbsorptionEstimate,
+  type PerforatedPanel,
+  type ResonatorEstimate,
+} from "./resonators";
