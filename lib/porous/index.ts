@@ -18,6 +18,7 @@ export { astmC423Ratings, noiseReductionCoefficient, soundAbsorptionAverage } fr
 export {
   RATING_EXACT_HZ,
   RATING_NOMINAL_HZ,
+  rateAbsorber,
   rateLayers,
   rateThirdOctaves,
   ratingThirdOctaves,
@@ -37,3 +38,31 @@ export {
   type PerforatedPanel,
   type ResonatorEstimate,
 } from "./resonators";
+export {
+  EDGE_EFFECT_NOT_INCLUDED,
+  cornerTrapAbsorption,
+  objectAbsorptionAreaM2,
+  panelAbsorption,
+  type CornerTrap,
+  type ObjectAbsorptionBand,
+} from "./object-absorption";
+export {
+  absorberObjectSchema,
+  absorberRatingRequestSchema,
+  absorberSpectrumRequestSchema,
+  airLayerSchema,
+  airSchema,
+  cornerTrapObjectSchema,
+  frequenciesHzSchema,
+  frequencyHzSchema,
+  incidenceSchema,
+  layerSchema,
+  layersSchema,
+  panelObjectSchema,
+  porousLayerSchema,
+  resistiveSheetSchema,
+  thirdOctaveAlphaSchema,
+  type AbsorberObject,
+  type AbsorberRatingRequest,
+  type AbsorberSpectrumRequest,
+} from "./schemas";

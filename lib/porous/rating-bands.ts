@@ -70,3 +70,15 @@ export function rateLayers(
   const thirdOctaves = ratingThirdOctaves(layers, air);
   return { thirdOctaves, ...rateThirdOctaves(thirdOctaves.map((b) => b.alpha)) };
 }
+
+/**
+ * Handles a parsed `absorberRatingRequestSchema` body: a stack is rated from its modelled
+ * random-incidence α; measured one-third-octave α are rated as given.
+ * @example rateAbsorber({ thirdOctaveAlpha: new Array(15).fill(0.85) }).iso11654.alphaW // 0.85
+ */
+export function rateAbsorber(
+  request: { layers: readonly Layer[]; air?: AirProperties } | { thirdOctaveAlpha: readonly number[] },
+): AbsorberRating & { thirdOctaves?: RatingBand[] } {
+  if ("thirdOctaveAlpha" in request) return rateThirdOctaves(request.thirdOctaveAlpha);
+  return rateLayers(request.layers, request.air ?? DEFAULT_AIR);
+}
