@@ -17,8 +17,10 @@ export interface ManagedChild {
 }
 
 const live = new Set<ManagedChild>();
+let closing = false;
 
 export function spawnManaged(name: string, cmd: string, args: string[], opts: { cwd: string; env: NodeJS.ProcessEnv }): ManagedChild {
+  if (closing) throw new Error(`not starting ${name}: shutting down`);
   const child = spawn(cmd, args, { cwd: opts.cwd, env: opts.env, stdio: ["ignore", "inherit", "inherit"], detached: true });
   let done = false;
   const exited = new Promise<{ code: number | null; signal: NodeJS.Signals | null }>((resolve) => {
@@ -78,8 +80,9 @@ function signalNumber(signal: NodeJS.Signals): number | undefined {
   return ({ SIGHUP: 1, SIGINT: 2, SIGKILL: 9, SIGTERM: 15 } as Record<string, number>)[signal];
 }
 
-/** Stops every child still running (in parallel). */
+/** Stops every child still running (in parallel); no new child starts afterwards. */
 export async function stopAllChildren(): Promise<void> {
+  closing = true;
   await Promise.all([...live].map((c) => c.stop()));
 }
 
