@@ -9,7 +9,7 @@ export interface ObjectAbsorptionBand {
   frequencyHz: number;
   /** random-incidence α of the build over its face (Paris), as modelled */
   alpha: number;
-  /** Sabine absorption area of all `count` objects, m² */
+  /** Sabine absorption area of all `count` objects, m² (a model α below 0, outside its fitted range, counts as 0) */
   absorptionAreaM2: number;
   withinModelRange: boolean;
 }
@@ -51,7 +51,7 @@ export function panelAbsorption(
   const bands = spectrumUnchecked(panel.layers, panel.frequenciesHz, "random", air).map((p) => ({
     frequencyHz: p.frequencyHz,
     alpha: p.alpha,
-    absorptionAreaM2: count * p.alpha * (faceAreaM2 + sideAreaM2), // Sabine area A = Σ S·α
+    absorptionAreaM2: count * Math.max(0, p.alpha) * (faceAreaM2 + sideAreaM2), // Sabine area A = Σ S·α; a model dip below 0 counts as 0
     withinModelRange: p.withinModelRange,
   }));
   return {
@@ -149,7 +149,7 @@ export function cornerTrapAbsorption(
     bands: Array.from(alpha, (a, f) => ({
       frequencyHz: trap.frequenciesHz[f]!,
       alpha: a,
-      absorptionAreaM2: count * a * faceAreaM2, // Sabine area A = S·α over the face
+      absorptionAreaM2: count * Math.max(0, a) * faceAreaM2, // Sabine area A = S·α over the face; a dip below 0 counts as 0
       withinModelRange: inRange[f]!,
     })),
   };

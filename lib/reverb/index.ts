@@ -1,0 +1,27 @@
+export { OCTAVE_BANDS_HZ, THIRD_OCTAVE_BANDS_HZ, bandSet, exactMidBandHz, type BandSet } from "./bands";
+export { airDensity, speedOfSound } from "./air-properties";
+export { airAttenuationDbPerM, intensityAttenuationPerM, type Atmosphere } from "./air-absorption";
+export { FINISHES, FINISH_IDS, finishAlpha, type Finish } from "./finishes";
+export { bandTotals, reverberationTime, type BandTotals, type ReverberationInput, type Surface } from "./reverberation-time";
+export {
+  LISTENING_ROOM_REFERENCE_VOLUME_M3,
+  SMALL_ROOM_BAND_S,
+  compareToTarget,
+  listeningRoomTargetS,
+  listeningRoomToleranceS,
+  targetBands,
+  type BandComparison,
+  type BandVerdict,
+  type ReverbTarget,
+  type TargetBand,
+} from "./targets";
+export { requiredAbsorption, type RequiredAbsorptionBand } from "./required-absorption";
+export {
+  evaluateTarget,
+  predictReverberation,
+  type PredictedBand,
+  type Prediction,
+  type RoomDescription,
+  type RoomSurface,
+} from "./predict";
+export { REVERB_LIMITS } from "./validate";
