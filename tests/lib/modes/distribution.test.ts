@@ -82,16 +82,17 @@ describe("bonelloCheck(room, options) — Bonello 1981, JAES 29:597 (from memory
 describe("asymptoticModeCount(room, frequencyHz, speedOfSound) — Kuttruff, Room Acoustics: N(f) = 4 pi V f^3/(3 c^3) + pi S f^2/(4 c^2) + L f/(8 c)", () => {
   it("gives 14.3 / 37.8 / 78.4 / 229.9 for 5 x 4 x 3 m at 100/150/200/300 Hz (REFERENCES.md [calc])", () => {
     const room = { lengthM: 5, widthM: 4, heightM: 3 };
-    expect([100, 150, 200, 300].map((f) => asymptoticModeCount(room, f))).toEqual(
-      [14.3, 37.8, 78.4, 229.9].map((v) => expect.closeTo(v, 1)),
-    );
+    // REFERENCES.md gives one decimal, so the tolerance is half a unit of that decimal.
+    [14.3, 37.8, 78.4, 229.9].forEach((v, i) => {
+      expect(Math.abs(asymptoticModeCount(room, [100, 150, 200, 300][i]!) - v)).toBeLessThanOrEqual(0.05);
+    });
   });
 
   for (const L of [[5, 4, 3], [7.2, 5.1, 2.7], [3, 3, 3], [10, 7.3, 3.9], [4.1, 2.3, 2.2]] as [number, number, number][]) {
     it(`agrees with the exact count within 3 % at high frequency for ${L.join(" x ")} m (Kuttruff; exact count by brute force)`, () => {
       const room = { lengthM: L[0], widthM: L[1], heightM: L[2] };
       const V = L[0] * L[1] * L[2];
-      const f = 343 * Math.cbrt((3 * 4000) / (4 * Math.PI * V)); // a frequency with about 4000 modes
+      const f = 343 * Math.cbrt((3 * 2000) / (4 * Math.PI * V)); // the volume term alone gives 2000 modes (under 1000 Hz here)
       const exact = bruteForceModes(L, f).length;
       expect(Math.abs(asymptoticModeCount(room, f) / exact - 1)).toBeLessThan(0.03);
       expect(roomModes(room, { maxFrequencyHz: f }).length).toBe(exact);

@@ -1,0 +1,160 @@
+import { flatnessFromSpectra, type PairSpectra } from "./flatness-kernel";
+import { LIMITS } from "./limits";
+import type { ModeSet } from "./mode-set";
+import { enumerateModes } from "./mode-set";
+import { angular, dampingConstant, inverseNorms, modeShapes, sourceGains } from "./modal-sum";
+import type { Point3, ProgressOptions, RectRoom, SoundSource } from "./types";
+import {
+  checkFrequencies, checkFrequency, checkInteger, checkNumber, checkPoint, checkRoom, checkRt60, checkSources, checkSpeedOfSound,
+} from "./validate";
+
+/** Result of a flatness map (CONTRACTS.md). */
+export interface FlatnessMapResult {
+  /** Cell-centre x, m: x_i = (i + 0.5) Lx / gridX. */
+  xM: number[];
+  /** Cell-centre y, m: y_j = (j + 0.5) Ly / gridY. */
+  yM: number[];
+  /** Population std-dev of the level over frequenciesHz, dB, index ix * gridY + iy. */
+  stdDevDb: Float64Array;
+}
+
+/** Grid and sum options shared by flatnessMap and multiSourceFlatnessMap. */
+export interface FlatnessGridOptions extends ProgressOptions {
+  /** Listening height z of every receiver, m, 0 <= heightM <= room.heightM. */
+  heightM: number;
+  /** Cells along x (length) and y (width), integers 1..400. */
+  gridX: number;
+  gridY: number;
+  /** 1..2000 frequencies, Hz, each in [1, 1000]. */
+  frequenciesHz: number[];
+  /** s, in [0.05, 10]. */
+  rt60Seconds: number;
+  /** m/s, default 343. */
+  speedOfSound?: number;
+  /** Modes up to this frequency enter the sum, Hz (required). */
+  maxModeFrequencyHz: number;
+}
+
+/**
+ * Sums the nz direction of the modal sum for receivers at height z0 (CONTRACTS.md modal sum):
+ * B[nx,ny](omega) = omega sum_nz cos(nz pi z0/Lz) S_n(omega) / (Lambda_n (omega^2 - omega_n^2 - 2j delta omega_n)),
+ * with S_n(omega) = sum_s p_s e^{-j omega tau_s} psi_n(r_s).
+ */
+function pairSpectra(room: RectRoom, set: ModeSet, sources: SoundSource[], z0: number, freqs: ArrayLike<number>, t60: number): PairSpectra {
+  const nf = freqs.length, W = 2 * nf, M = set.count, S = sources.length;
+  const omega = angular(freqs);
+  const delta = dampingConstant(t60);
+  const lamInv = inverseNorms(set);
+  const psiS = sources.map((s) => modeShapes(room, set, s.position));
+  const plain = sources.every((s) => !s.delayMs);
+  const gains = sourceGains(sources, omega);
+  // Pair index of each (nx, ny).
+  let NX = 0, NY = 0;
+  for (let n = 0; n < M; n++) { NX = Math.max(NX, set.nx[n]! + 1); NY = Math.max(NY, set.ny[n]! + 1); }
+  const index = new Int32Array(NX * NY).fill(-1);
+  const pnx: number[] = [], pny: number[] = [];
+  for (let n = 0; n < M; n++) {
+    const key = set.nx[n]! * NY + set.ny[n]!;
+    if (index[key]! < 0) { index[key] = pnx.length; pnx.push(set.nx[n]!); pny.push(set.ny[n]!); }
+  }
+  const pairs = pnx.length;
+  if (pairs * nf > LIMITS.maxPairFrequencyProducts)
+    throw new RangeError(`maxModeFrequencyHz: this room, ${nf} frequencies and modes up to ${set.frequencyHz[M - 1]!.toFixed(1)} Hz need ${pairs} x ${nf} spectra; the limit is ${LIMITS.maxPairFrequencyProducts}`);
+  const B = new Float64Array(pairs * W);
+  const kz = (Math.PI * z0) / room.heightM;
+  for (let n = 0; n < M; n++) {
+    const o = index[set.nx[n]! * NY + set.ny[n]!]! * W;
+    const wn = 2 * Math.PI * set.frequencyHz[n]!;
+    const b = 2 * delta * wn;
+    const cz = Math.cos(set.nz[n]! * kz) * lamInv[n]!;
+    if (plain) {
+      let a0 = 0;
+      for (let k = 0; k < S; k++) a0 += (sources[k]!.polarity ?? 1) * psiS[k]![n]!;
+      const amp = a0 * cz;
+      if (amp === 0) continue;
+      for (let f = 0; f < nf; f++) {
+        const w = omega[f]!;
+        // omega * amp / (a - j b) = omega * amp * (a + j b)/(a^2 + b^2), a = omega^2 - omega_n^2
+        const a = w * w - wn * wn;
+        const s = (amp * w) / (a * a + b * b);
+        B[o + 2 * f] = B[o + 2 * f]! + a * s;
+        B[o + 2 * f + 1] = B[o + 2 * f + 1]! + b * s;
+      }
+    } else {
+      for (let f = 0; f < nf; f++) {
+        const w = omega[f]!;
+        let sr = 0, si = 0;
+        for (let k = 0; k < S; k++) { sr += gains.re[k * nf + f]! * psiS[k]![n]!; si += gains.im[k * nf + f]! * psiS[k]![n]!; }
+        const a = w * w - wn * wn;
+        const s = (cz * w) / (a * a + b * b);
+        // (sr + j si)(a + j b) s
+        B[o + 2 * f] = B[o + 2 * f]! + (sr * a - si * b) * s;
+        B[o + 2 * f + 1] = B[o + 2 * f + 1]! + (sr * b + si * a) * s;
+      }
+    }
+  }
+  return { pairs, nx: Int32Array.from(pnx), ny: Int32Array.from(pny), B, nf };
+}
+
+function checkGridOptions(room: RectRoom, o: FlatnessGridOptions) {
+  const z0 = checkNumber(o.heightM, "heightM", 0, room.heightM, "m");
+  const gridX = checkInteger(o.gridX, "gridX", 1, LIMITS.maxGrid);
+  const gridY = checkInteger(o.gridY, "gridY", 1, LIMITS.maxGrid);
+  const freqs = checkFrequencies(o.frequenciesHz, "frequenciesHz");
+  const t60 = checkRt60(o.rt60Seconds);
+  const c = checkSpeedOfSound(o.speedOfSound);
+  const fMax = checkFrequency(o.maxModeFrequencyHz, "maxModeFrequencyHz");
+  if (o.onProgress !== undefined && typeof o.onProgress !== "function") throw new TypeError("onProgress must be a function");
+  return { z0, gridX, gridY, freqs, t60, c, fMax };
+}
+
+/**
+ * Flatness map for several sources driven together (each with optional delay and polarity): the
+ * population standard deviation over frequency of the level of the summed modal response, at the cell
+ * centres of a gridX x gridY grid at one listening height. Same sum and layout as flatnessMap.
+ *
+ * @param room dimensions, m
+ * @param options see FlatnessGridOptions; `sources`: 1..16 sources inside the room
+ * @returns { xM, yM, stdDevDb } with stdDevDb[ix * gridY + iy] in dB
+ * @throws TypeError / RangeError naming the field; an Error named "AbortError" when options.signal is aborted
+ * @example
+ * multiSourceFlatnessMap(room, { sources: [{ position: [0, 0, 0] }, { position: [7.2, 5.1, 0] }], heightM: 1.1,
+ *   gridX: 72, gridY: 51, frequenciesHz: logSpacedFrequencies(20, 120, 96), rt60Seconds: 0.4, maxModeFrequencyHz: 200 })
+ */
+export function multiSourceFlatnessMap(room: RectRoom, options: FlatnessGridOptions & { sources: SoundSource[] }): FlatnessMapResult {
+  checkRoom(room);
+  if (typeof options !== "object" || options === null) throw new TypeError("options must be an object");
+  const sources = checkSources(options.sources, "sources", room);
+  const { z0, gridX, gridY, freqs, t60, c, fMax } = checkGridOptions(room, options);
+  const set = enumerateModes(room, fMax, c, true, "maxModeFrequencyHz");
+  const spectra = pairSpectra(room, set, sources, z0, freqs, t60);
+  const stdDevDb = flatnessFromSpectra(spectra, gridX, gridY, options);
+  return {
+    xM: Array.from({ length: gridX }, (_, i) => ((i + 0.5) * room.lengthM) / gridX),
+    yM: Array.from({ length: gridY }, (_, j) => ((j + 0.5) * room.widthM) / gridY),
+    stdDevDb,
+  };
+}
+
+/**
+ * Flatness map of one source (CONTRACTS.md): receivers at the cell centres x_i = (i + 0.5) Lx/gridX,
+ * y_j = (j + 0.5) Ly/gridY, z = heightM; stdDevDb[ix * gridY + iy] is the population standard deviation
+ * of modalResponse's level over frequenciesHz, dB. Optional `onProgress(fraction)` and `signal`
+ * ({ aborted }) let a Web Worker report progress and cancel.
+ *
+ * @param room dimensions, m
+ * @param options source [x, y, z] in m inside the room, heightM m, gridX/gridY 1..400,
+ *   frequenciesHz 1..2000 values in [1, 1000] Hz, rt60Seconds [0.05, 10] s, speedOfSound m/s (343),
+ *   maxModeFrequencyHz Hz (required)
+ * @throws TypeError / RangeError naming the field; an Error named "AbortError" when cancelled
+ * @example
+ * flatnessMap({ lengthM: 7.2, widthM: 5.1, heightM: 2.7 }, { source: [0.3, 0.3, 0.3], heightM: 1.2,
+ *   gridX: 120, gridY: 90, frequenciesHz: logSpacedFrequencies(15, 250, 400), rt60Seconds: 0.5,
+ *   maxModeFrequencyHz: 400 }).stdDevDb[0] // std-dev at the cell nearest the origin, dB
+ */
+export function flatnessMap(room: RectRoom, options: FlatnessGridOptions & { source: Point3 }): FlatnessMapResult {
+  checkRoom(room);
+  if (typeof options !== "object" || options === null) throw new TypeError("options must be an object");
+  checkPoint(options.source, "source", room);
+  return multiSourceFlatnessMap(room, { ...options, sources: [{ position: options.source }] });
+}
