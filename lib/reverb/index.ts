@@ -25,3 +25,21 @@ export {
   type RoomSurface,
 } from "./predict";
 export { REVERB_LIMITS } from "./validate";
+export {
+  alphaSchema,
+  bandSetSchema,
+  formulaSchema,
+  pressureKPaSchema,
+  relativeHumidityPctSchema,
+  reverberationInputSchema,
+  reverbPredictRequestSchema,
+  reverbTargetRequestSchema,
+  reverbTargetSchema,
+  roomSurfaceSchema,
+  surfaceSchema,
+  temperatureCSchema,
+  treatmentSchema,
+  volumeM3Schema,
+  type ReverbPredictRequest,
+  type ReverbTargetRequest,
+} from "./schemas";
