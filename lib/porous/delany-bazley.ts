@@ -33,7 +33,7 @@ export function delanyBazleyParameter(frequencyHz: number, flowResistivity: numb
  * Delany & Bazley, sign convention e^{+jωt} (negative imaginary parts).
  * Arguments are not checked here (hot path): use {@link absorptionSpectrum} for checked input.
  * @param frequencyHz f in Hz; @param flowResistivity σ in Pa·s/m²; @param air ρ₀ (kg/m³) and c (m/s)
- * @example delanyBazley(500, 10_000, { densityKgM3: 1.204, speedOfSound: 343 }).zc // ≈ { re: 578, im: -469 }
+ * @example delanyBazley(500, 10_000, { densityKgM3: 1.204, speedOfSound: 343 }).zc // ≈ { re: 609.2, im: -281.0 }
  */
 export function delanyBazley(frequencyHz: number, flowResistivity: number, air: AirProperties): PorousProperties {
   const rho0c = air.densityKgM3 * air.speedOfSound;

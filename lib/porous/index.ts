@@ -1,3 +1,11 @@
+/**
+ * lib/porous — porous and resonant absorbers: layer models (Delany–Bazley, Miki), surface impedance of
+ * stacks on a rigid wall, incidence averaging, single-number ratings (ISO 11654, ASTM C423), fibre
+ * resistivity estimate, generic materials, resonators, absorption area of panels and corner traps, and
+ * the zod schemas of the API bodies. Pure TypeScript: runs in a Web Worker, a route handler or a PDF
+ * renderer. Functions check their arguments and throw TypeError (wrong type or unknown kind) or
+ * RangeError (out of range), naming the field; the schemas give ZodError issues with the field's path.
+ */
 export type { AirProperties, Incidence, Layer, PorousProperties, SpectrumPoint } from "./types";
 export { DEFAULT_AIR } from "./types";
 export { LIMITS } from "./limits";

@@ -22,7 +22,7 @@ export const MIKI_RANGE = Object.freeze({ min: 0.01, max: 1 });
  * Characteristic impedance Zc (Pa·s/m) and wavenumber kc (1/m) after Miki, e^{+jωt} convention.
  * Arguments are not checked here (hot path).
  * @param frequencyHz f in Hz; @param flowResistivity σ in Pa·s/m²; @param air ρ₀ (kg/m³), c (m/s)
- * @example miki(2000, 2000, { densityKgM3: 1.204, speedOfSound: 343 }).zc // { re: 441.85, im: -44.19 }
+ * @example miki(2000, 2000, { densityKgM3: 1.204, speedOfSound: 343 }).zc // { re: 441.84, im: -44.19 }
  */
 export function miki(frequencyHz: number, flowResistivity: number, air: AirProperties): PorousProperties {
   const rho0c = air.densityKgM3 * air.speedOfSound;

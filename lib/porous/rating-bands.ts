@@ -35,7 +35,7 @@ export interface AbsorberRating {
  * Random-incidence α of a stack at the 15 exact one-third-octave mid-band frequencies 200…5000 Hz,
  * the input of the single-number ratings. α is taken at the mid-band frequency (not band-averaged).
  * @param layers front to back on a rigid wall; @param air optional air properties
- * @example ratingThirdOctaves([{ kind: 'porous', thicknessM: 0.05, flowResistivity: 15_000, model: 'miki' }])[7].alpha // ≈ 0.88
+ * @example ratingThirdOctaves([{ kind: 'porous', thicknessM: 0.05, flowResistivity: 15_000, model: 'miki' }])[7].alpha // ≈ 0.874
  */
 export function ratingThirdOctaves(layers: readonly Layer[], air: AirProperties = DEFAULT_AIR): RatingBand[] {
   checkLayers(layers);
@@ -61,7 +61,7 @@ export function rateThirdOctaves(thirdOctaveAlpha: readonly number[]): AbsorberR
  * Rates a layer stack from its modelled random-incidence α (an infinite layer, no edge effect): a
  * model estimate of what ISO 354 + ISO 11654 / ASTM C423 would give, not a measurement.
  * @param layers front to back; @param air optional air properties
- * @example rateLayers([{ kind: 'porous', thicknessM: 0.05, flowResistivity: 15_000, model: 'delany-bazley' }]).nrc // 0.65
+ * @example rateLayers([{ kind: 'porous', thicknessM: 0.05, flowResistivity: 15_000, model: 'delany-bazley' }]).nrc // 0.7 (αw 0.60 MH, class C)
  */
 export function rateLayers(
   layers: readonly Layer[],

@@ -1,3 +1,9 @@
+/**
+ * lib/reverb — reverberation of a room: bands (IEC 61260-1), air (c and ρ₀ from temperature, ISO 9613-1
+ * absorption), the built-in finishes table, Sabine and Eyring, targets with verdicts, the absorption
+ * needed to reach a target, room prediction with treatment, and the zod schemas of the API bodies.
+ * Functions throw TypeError/RangeError naming the field; the schemas give ZodError issues with paths.
+ */
 export { OCTAVE_BANDS_HZ, THIRD_OCTAVE_BANDS_HZ, bandSet, exactMidBandHz, type BandSet } from "./bands";
 export { airDensity, speedOfSound } from "./air-properties";
 export { airAttenuationDbPerM, intensityAttenuationPerM, type Atmosphere } from "./air-absorption";

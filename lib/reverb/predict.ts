@@ -101,7 +101,7 @@ function resolve(room: RoomDescription): Resolved {
  * speed of sound and density from the temperature, air absorption by ISO 9613-1 at the room's
  * temperature and humidity, plus the treatment's absorption area. Bands are evaluated at exact
  * mid-band frequencies (IEC 61260-1). Default formula Eyring; default air 20 °C, 50 % RH.
- * @example predictReverberation({ volumeM3: 32, surfaces: [{ areaM2: 62, finish: 'painted-drywall-on-studs' }] }).bands[3].timeS // ≈ 1.6
+ * @example predictReverberation({ volumeM3: 32, surfaces: [{ areaM2: 62, finish: 'painted-drywall-on-studs' }] }).bands[3].timeS // ≈ 1.58
  */
 export function predictReverberation(room: RoomDescription): Prediction {
   const r = resolve(room);
