@@ -9,7 +9,7 @@ import { DEMO_ACCOUNTS } from "../db/seed-data";
 import { startFakeSmtp, type FakeSmtpHandle } from "./services/fake-smtp";
 import { buildFingerprint, buildIsCurrent, forgetBuild, recordBuild } from "./services/next-build";
 import { createDatabaseIfMissing, ensurePostgres, portIsFree, type PostgresHandle } from "./services/postgres";
-import { type ManagedChild, runToEnd, seconds, spawnManaged, stopAllChildren, waitForHttp } from "./services/processes";
+import { type ManagedChild, reapOrphans, runToEnd, seconds, spawnManaged, stopAllChildren, trackChildrenIn, waitForHttp } from "./services/processes";
 
 const root = path.resolve(path.dirname(new URL(import.meta.url).pathname), "..");
 const dev = process.argv.includes("--dev");
@@ -72,6 +72,9 @@ process.on("SIGTERM", () => void shutdown(143, "terminated"));
 process.on("SIGHUP", () => void shutdown(129, "hang-up"));
 
 async function main(): Promise<void> {
+  const childrenDir = path.join(root, ".data", "children");
+  await reapOrphans(childrenDir, root);
+  trackChildrenIn(childrenDir);
   for (const [p, what, knob] of [
     [port, "Next.js", "PORT"],
     [smtpPort, "the fake SMTP server", "EIGENROOM_SMTP_PORT"],

@@ -15,7 +15,7 @@ import { seedDemo } from "../db/seed";
 import { startFakeSmtp, type FakeSmtpHandle } from "./services/fake-smtp";
 import { buildFingerprint, buildIsCurrent, forgetBuild, recordBuild } from "./services/next-build";
 import { ensurePostgres, freePort, portIsFree, recreateDatabase, type PostgresHandle } from "./services/postgres";
-import { runToEnd, seconds, spawnManaged, stopAllChildren, waitForHttp } from "./services/processes";
+import { reapOrphans, runToEnd, seconds, spawnManaged, stopAllChildren, trackChildrenIn, waitForHttp } from "./services/processes";
 
 const root = path.resolve(path.dirname(new URL(import.meta.url).pathname), "..");
 const TEST_DB = "eigenroom_test";
@@ -200,6 +200,9 @@ async function main(): Promise<number> {
   const { projects, paths, extra } = parseArgs(process.argv.slice(2));
   const filtered = process.argv.length > 2;
   await acquireLock();
+  const childrenDir = path.join(root, ".data", "children");
+  await reapOrphans(childrenDir, root);
+  trackChildrenIn(childrenDir);
 
   let ok = true;
   let databaseUrl = "";

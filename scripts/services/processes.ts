@@ -2,7 +2,9 @@
 // stopping it also stops whatever it spawned (Next's build workers), and so that a Ctrl-C is handled
 // once, by the script, which then stops everything in order.
 import { type ChildProcess, spawn } from "node:child_process";
+import fs from "node:fs";
 import http from "node:http";
+import path from "node:path";
 import { sleep } from "./postgres";
 
 export interface ManagedChild {
@@ -18,6 +20,60 @@ export interface ManagedChild {
 
 const live = new Set<ManagedChild>();
 let closing = false;
+let trackDir: string | undefined;
+
+/**
+ * Records every child started from now on as a file `<our pid>-<child pid>` in `dir`, so that a
+ * later run can stop children left behind when this process was killed outright (SIGKILL).
+ */
+export function trackChildrenIn(dir: string): void {
+  fs.mkdirSync(dir, { recursive: true });
+  trackDir = dir;
+}
+
+/**
+ * Stops children recorded in `dir` whose parent run has died, provided they still run in `cwd`
+ * (a reused pid belongs to something else). Returns how many it stopped.
+ */
+export async function reapOrphans(dir: string, cwd: string): Promise<number> {
+  let names: string[] = [];
+  try {
+    names = fs.readdirSync(dir);
+  } catch {
+    return 0;
+  }
+  let reaped = 0;
+  for (const name of names) {
+    const match = /^(\d+)-(\d+)$/.exec(name);
+    if (!match) continue;
+    const [parent, child] = [Number(match[1]), Number(match[2])];
+    if (processAlive(parent)) continue;
+    let childCwd = "";
+    try {
+      childCwd = fs.readlinkSync(`/proc/${child}/cwd`);
+    } catch {
+      // gone
+    }
+    if (childCwd === cwd) {
+      console.log(`eigenroom: stopping process ${child} left behind by an earlier run that was killed`);
+      signalGroup(child, "SIGTERM");
+      for (let i = 0; i < 50 && processAlive(child); i++) await sleep(100);
+      signalGroup(child, "SIGKILL");
+      reaped++;
+    }
+    fs.rmSync(path.join(dir, name), { force: true });
+  }
+  return reaped;
+}
+
+function processAlive(pid: number): boolean {
+  try {
+    process.kill(pid, 0);
+    return true;
+  } catch (err) {
+    return (err as { code?: string }).code === "EPERM";
+  }
+}
 
 export function spawnManaged(name: string, cmd: string, args: string[], opts: { cwd: string; env: NodeJS.ProcessEnv }): ManagedChild {
   if (closing) throw new Error(`not starting ${name}: shutting down`);
@@ -56,7 +112,12 @@ export function spawnManaged(name: string, cmd: string, args: string[], opts: { 
     },
   };
   live.add(managed);
-  void exited.then(() => live.delete(managed));
+  const record = trackDir && child.pid ? path.join(trackDir, `${process.pid}-${child.pid}`) : undefined;
+  if (record) fs.writeFileSync(record, `${name}\n`);
+  void exited.then(() => {
+    live.delete(managed);
+    if (record) fs.rmSync(record, { force: true });
+  });
   return managed;
 }
 
