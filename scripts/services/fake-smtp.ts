@@ -33,6 +33,8 @@ export async function startFakeSmtp(opts: FakeSmtpOptions): Promise<FakeSmtpHand
     // smtp-server's bundled certificate has expired: offer no TLS at all.
     disabledCommands: ["STARTTLS"],
     secure: false,
+    // No reverse DNS of the client: on a machine without a resolver it stalls the greeting.
+    disableReverseLookup: true,
     authOptional: true,
     // A production-like SMTP_URL with credentials works against the fake too.
     allowInsecureAuth: true,
