@@ -18,6 +18,7 @@ export default defineConfig({
         test: {
           name: "integration",
           include: ["tests/integration/**/*.test.ts"],
+          setupFiles: ["tests/support/next-context.ts"],
           environment: "node",
           fileParallelism: false,
           testTimeout: 30_000,
