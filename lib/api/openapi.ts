@@ -1,4 +1,6 @@
 import { z } from "zod";
+import { absorberRatingRequestSchema, absorberSpectrumRequestSchema } from "@/lib/porous/schemas";
+import { reverbPredictRequestSchema, reverbTargetRequestSchema } from "@/lib/reverb/schemas";
 import { inviteSchema, memberUpdateSchema } from "@/lib/schemas/member";
 import { projectInputSchema, projectUpdateSchema } from "@/lib/schemas/project";
 import { roomInputSchema, roomUpdateSchema } from "@/lib/schemas/room";
@@ -31,6 +33,10 @@ const ENDPOINTS: EndpointDoc[] = [
   { method: "get", path: "/members", summary: "Members of the caller's firm (owner, engineer)", tag: "Team", success: 200 },
   { method: "post", path: "/members", summary: "Invite a member by e-mail (owner)", tag: "Team", body: inviteSchema, success: 201 },
   { method: "patch", path: "/members/{userId}", summary: "Change a member's role or deactivate them (owner)", tag: "Team", body: memberUpdateSchema, success: 200 },
+  { method: "post", path: "/absorbers/spectrum", summary: "Absorption coefficient per frequency of a layer stack (Delany–Bazley or Miki, transfer of impedance)", tag: "Absorbers", body: absorberSpectrumRequestSchema, success: 200 },
+  { method: "post", path: "/absorbers/rating", summary: "ISO 11654 αw, shape indicators and class; ASTM C423 NRC and SAA", tag: "Absorbers", body: absorberRatingRequestSchema, success: 200 },
+  { method: "post", path: "/reverb/predict", summary: "Reverberation time per band (Sabine/Eyring, ISO 9613-1 air absorption)", tag: "Decay", body: reverbPredictRequestSchema, success: 200 },
+  { method: "post", path: "/reverb/target", summary: "Prediction against a target band, with the verdict and the absorption needed per band", tag: "Decay", body: reverbTargetRequestSchema, success: 200 },
   { method: "get", path: "/openapi.json", summary: "This document", tag: "Meta", success: 200, public: true },
 ];
 
@@ -57,14 +63,29 @@ const errorSchema = {
   },
 };
 
-function jsonSchema(schema: z.ZodType): unknown {
-  const { $schema: _drop, ...rest } = z.toJSONSchema(schema, { io: "input", unrepresentable: "any" }) as Record<string, unknown>;
-  return rest;
+/**
+ * JSON Schema of a request body. Schemas with a meta id come out as `$defs`; they move to
+ * `components.schemas` and their references are rewritten to point there.
+ */
+function jsonSchema(schema: z.ZodType, components: Record<string, unknown>): unknown {
+  const { $schema: _drop, $defs, ...rest } = z.toJSONSchema(schema, { io: "input", unrepresentable: "any" }) as Record<string, unknown>;
+  const rewrite = (value: unknown): unknown => {
+    if (Array.isArray(value)) return value.map(rewrite);
+    if (value && typeof value === "object") {
+      return Object.fromEntries(
+        Object.entries(value).map(([k, v]) => [k, k === "$ref" && typeof v === "string" ? v.replace("#/$defs/", "#/components/schemas/") : rewrite(v)]),
+      );
+    }
+    return value;
+  };
+  for (const [name, def] of Object.entries(($defs ?? {}) as Record<string, unknown>)) components[name] = rewrite(def);
+  return rewrite(rest);
 }
 
 /** The OpenAPI 3.1 document of /api/v1, generated from the handlers' zod schemas. */
 export function openApiDocument(): Record<string, unknown> {
   const paths: Record<string, Record<string, unknown>> = {};
+  const schemas: Record<string, unknown> = { Error: errorSchema };
   for (const e of endpoints) {
     const params = [...e.path.matchAll(/\{(\w+)\}/g)].map((m) => ({ name: m[1], in: "path", required: true, schema: { type: "string" } }));
     const errors = {
@@ -78,7 +99,7 @@ export function openApiDocument(): Record<string, unknown> {
       summary: e.summary,
       tags: [e.tag],
       ...(params.length > 0 && { parameters: params }),
-      ...(e.body && { requestBody: { required: true, content: { "application/json": { schema: jsonSchema(e.body) } } } }),
+      ...(e.body && { requestBody: { required: true, content: { "application/json": { schema: jsonSchema(e.body, schemas) } } } }),
       responses: { [String(e.success)]: { description: e.success === 204 ? "Done, no body" : "OK" }, ...errors },
       ...(e.public ? { security: [] } : {}),
     };
@@ -88,7 +109,7 @@ export function openApiDocument(): Record<string, unknown> {
     info: { title: "Eigenroom API", version: "1", description: "JSON API of Eigenroom. Errors are `{ error: { code, message, fields? } }`. SI units throughout." },
     servers: [{ url: "/api/v1" }],
     components: {
-      schemas: { Error: errorSchema },
+      schemas,
       securitySchemes: { session: { type: "apiKey", in: "cookie", name: "eigenroom_session" } },
     },
     security: [{ session: [] }],
