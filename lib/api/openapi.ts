@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { flatnessMapRequestSchema, modalResponseRequestSchema, modesRequestSchema } from "@/lib/modes/schemas";
 import { absorberRatingRequestSchema, absorberSpectrumRequestSchema } from "@/lib/porous/schemas";
 import { reverbPredictRequestSchema, reverbTargetRequestSchema } from "@/lib/reverb/schemas";
 import { inviteSchema, memberUpdateSchema } from "@/lib/schemas/member";
@@ -33,6 +34,9 @@ const ENDPOINTS: EndpointDoc[] = [
   { method: "get", path: "/members", summary: "Members of the caller's firm (owner, engineer)", tag: "Team", success: 200 },
   { method: "post", path: "/members", summary: "Invite a member by e-mail (owner)", tag: "Team", body: inviteSchema, success: 201 },
   { method: "patch", path: "/members/{userId}", summary: "Change a member's role or deactivate them (owner)", tag: "Team", body: memberUpdateSchema, success: 200 },
+  { method: "post", path: "/modes", summary: "Room modes up to a frequency (Rayleigh); with RT60 also bandwidths, coincidences, gaps, Schroeder frequency, Bonello and EBU Tech 3276 checks", tag: "Low end", body: modesRequestSchema, success: 200 },
+  { method: "post", path: "/modes/response", summary: "Modal response in dB between a source and a receiver (modal sum)", tag: "Low end", body: modalResponseRequestSchema, success: 200 },
+  { method: "post", path: "/modes/flatness-map", summary: "Std-dev of the level over frequency on a grid at listening height (index ix*gridY + iy)", tag: "Low end", body: flatnessMapRequestSchema, success: 200 },
   { method: "post", path: "/absorbers/spectrum", summary: "Absorption coefficient per frequency of a layer stack (Delany–Bazley or Miki, transfer of impedance)", tag: "Absorbers", body: absorberSpectrumRequestSchema, success: 200 },
   { method: "post", path: "/absorbers/rating", summary: "ISO 11654 αw, shape indicators and class; ASTM C423 NRC and SAA", tag: "Absorbers", body: absorberRatingRequestSchema, success: 200 },
   { method: "post", path: "/reverb/predict", summary: "Reverberation time per band (Sabine/Eyring, ISO 9613-1 air absorption)", tag: "Decay", body: reverbPredictRequestSchema, success: 200 },

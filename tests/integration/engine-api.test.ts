@@ -74,3 +74,50 @@ describe("POST /reverb/predict and /reverb/target", () => {
     expect(res.json.error.fields.volumeM3).toBeDefined();
   });
 });
+
+import * as modes from "@/app/api/v1/modes/route";
+import * as modesResponse from "@/app/api/v1/modes/response/route";
+import * as flatness from "@/app/api/v1/modes/flatness-map/route";
+import { flatnessMap, modalResponse, roomModes } from "@/lib/modes";
+
+const rect = { lengthM: 5.8, widthM: 4.1, heightM: 2.5 };
+
+describe("POST /modes, /modes/response, /modes/flatness-map", () => {
+  it("lists the modes roomModes lists, with the table when RT60 is given", async () => {
+    const res = await callRoute(modes.POST, { body: { room: rect, maxFrequencyHz: 120, rt60Seconds: 0.4 } });
+    expect(res.status).toBe(200);
+    expect(res.json.modes).toEqual(roomModes(rect, { maxFrequencyHz: 120 }));
+    expect(res.json.schroederFrequencyHz).toBeCloseTo(2000 * Math.sqrt(0.4 / (5.8 * 4.1 * 2.5)), 9);
+    expect(res.json.table).toBeDefined();
+  });
+
+  it("answers the modal response modalResponse computes", async () => {
+    const body = { room: rect, source: [0.3, 0.3, 0.3], receiver: [3.5, 2.05, 1.1], frequenciesHz: [30, 45, 60], rt60Seconds: 0.4, maxModeFrequencyHz: 300 };
+    const res = await callRoute(modesResponse.POST, { body });
+    expect(res.status).toBe(200);
+    const { room, ...options } = body;
+    expect(res.json.levelsDb).toEqual(modalResponse(room, options as Parameters<typeof modalResponse>[1]));
+  });
+
+  it("answers a receiver outside the room with 400 naming receiver.0", async () => {
+    const res = await callRoute(modesResponse.POST, { body: { room: rect, source: [0.3, 0.3, 0.3], receiver: [9, 1, 1], frequenciesHz: [40], rt60Seconds: 0.4, maxModeFrequencyHz: 200 } });
+    expect(res.status).toBe(400);
+    expect(Object.keys(res.json.error.fields)).toContain("receiver.0");
+  });
+
+  it("returns the flatness map as numbers in the contract's index order", async () => {
+    const body = { room: rect, source: [0.2, 0.2, 0.2], heightM: 1.1, gridX: 6, gridY: 4, frequenciesHz: [20, 30, 40, 50, 60, 80, 100], rt60Seconds: 0.4, maxModeFrequencyHz: 200 };
+    const res = await callRoute(flatness.POST, { body });
+    expect(res.status).toBe(200);
+    const { room, ...options } = body;
+    const direct = flatnessMap(room, options as Parameters<typeof flatnessMap>[1]);
+    expect(res.json.stdDevDb).toEqual(Array.from(direct.stdDevDb));
+    expect(res.json.stdDevDb).toHaveLength(24);
+  });
+
+  it("refuses a 1000 × 1000 grid with 400 on gridX", async () => {
+    const res = await callRoute(flatness.POST, { body: { room: rect, source: [0.2, 0.2, 0.2], heightM: 1.1, gridX: 1000, gridY: 1000, frequenciesHz: [40], rt60Seconds: 0.4, maxModeFrequencyHz: 200 } });
+    expect(res.status).toBe(400);
+    expect(res.json.error.fields.gridX).toBeDefined();
+  });
+});
