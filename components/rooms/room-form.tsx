@@ -166,6 +166,9 @@ export function RoomForm({ projectId, roomId, version, initial, initialUnits }: 
   );
 }
 
+/** NaN for a blank or non-numeric entry; a negative entry maps to a negative length so the schema names it. */
 function feetInchesToMetresSafe(feet: number, inches: number): number {
-  return Number.isFinite(feet) && Number.isFinite(inches) ? feetInchesToMetres(feet, inches) : Number.NaN;
+  if (!Number.isFinite(feet) || !Number.isFinite(inches)) return Number.NaN;
+  if (feet < 0 || inches < 0) return -1;
+  return feetInchesToMetres(feet, inches);
 }

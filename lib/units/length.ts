@@ -1,19 +1,17 @@
 import { unit } from "mathjs";
+import { feetInchesToMetres, metresToFeetInches as exactFeetInches } from "@/lib/modes";
+
+// The conversions themselves live in lib/modes (units at the module's edge); this file adds what the
+// screens need on top: rounding to a carpenter's fraction of an inch, areas and volumes.
+export { feetInchesToMetres };
 
 export type UnitSystem = "metric" | "imperial";
 
-/** Feet and inches → metres through mathjs units (1 ft = 0.3048 m exactly, NIST SP 811). */
-export function feetInchesToMetres(feet: number, inches: number): number {
-  if (!Number.isFinite(feet) || !Number.isFinite(inches)) throw new RangeError("feet and inches must be finite numbers");
-  return unit(feet, "ft").toNumber("m") + unit(inches, "inch").toNumber("m");
-}
-
-/** Metres → whole feet and inches (inches rounded to `inchStep`, carried into feet at 12). */
+/** Metres → whole feet and inches, the inches rounded to `inchStep` and carried into feet at 12. */
 export function metresToFeetInches(metres: number, inchStep = 0.25): { feet: number; inches: number } {
-  if (!Number.isFinite(metres) || metres < 0) throw new RangeError("metres must be a finite number ≥ 0");
-  const totalInches = Math.round(unit(metres, "m").toNumber("inch") / inchStep) * inchStep;
-  const feet = Math.floor(totalInches / 12 + 1e-9);
-  return { feet, inches: Math.max(0, +(totalInches - feet * 12).toFixed(2)) };
+  const { feet, inches } = exactFeetInches(metres);
+  const rounded = Math.round(inches / inchStep) * inchStep;
+  return rounded >= 12 ? { feet: feet + 1, inches: 0 } : { feet, inches: +rounded.toFixed(2) };
 }
 
 /**

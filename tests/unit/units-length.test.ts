@@ -6,7 +6,7 @@ describe("feetInchesToMetres", () => {
   it("converts 12 ft 6 in to 3.81 m exactly", () => {
     expect(feetInchesToMetres(12, 6)).toBeCloseTo(3.81, 12);
   });
-  it("refuses non-finite input", () => {
+  it("refuses non-finite input (lib/modes validation)", () => {
     expect(() => feetInchesToMetres(Number.NaN, 0)).toThrow(RangeError);
   });
 });
