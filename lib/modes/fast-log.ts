@@ -37,18 +37,16 @@ export function lnMoments(p: Float64Array, bits: Int32Array, start: number, coun
   const end = start + count;
   for (let i = start; i < end; i++) if (!(p[i]! > LN_FLOOR)) p[i] = LN_FLOOR;
   if (!LITTLE_ENDIAN) return lnMomentsPlain(p, start, count, out, at);
-  // Shift by the first value: variance of (l - K) equals that of l and loses less to cancellation.
-  let K = 0, s = 0, s2 = 0;
+  // Shift by the first value: the variance of (l - K) equals that of l and loses less to cancellation.
+  const K = Math.log(p[start]!);
+  let s = 0, s2 = 0;
   for (let i = start; i < end; i++) {
     const hi = bits[2 * i + 1]!;
     const E = hi >> 20; // sign bit is 0 for p > 0
     const k = (hi >> 12) & 0xff;
-    const m = p[i]! * EXPONENT[2 * E]!;
-    const r = m * TABLE[2 * k]! - 1;
+    const r = p[i]! * EXPONENT[2 * E]! * TABLE[2 * k]! - 1;
     // ln p = e ln2 + ln c_k + (r - r^2/2 + r^3/3 - r^4/4)  (A&S 4.1.24)
-    const l = EXPONENT[2 * E + 1]! + TABLE[2 * k + 1]! + r * (1 - r * (0.5 - r * (1 / 3 - r * 0.25)));
-    if (i === start) K = l;
-    const d = l - K;
+    const d = EXPONENT[2 * E + 1]! + TABLE[2 * k + 1]! - K + r * (1 - r * (0.5 - r * (1 / 3 - r * 0.25)));
     s += d;
     s2 += d * d;
   }
@@ -57,10 +55,57 @@ export function lnMoments(p: Float64Array, bits: Int32Array, start: number, coun
   out[at + 1] = Math.max(0, s2 / count - mean * mean);
 }
 
+/**
+ * For complex spectra E (from E[eo]) and O (from O[oo]) (interleaved re, im; nf values each), the population variances over
+ * frequency of ln|E + O|^2 and ln|E - O|^2 (the levels of a cell and of its mirror image), written to
+ * out[0] and out[1]. Powers below LN_FLOOR count as LN_FLOOR. `pw` (2 doubles at least) and `bits` are
+ * scratch sharing one buffer; the logarithm is the one of lnMoments, fused with the power here.
+ */
+export function mirroredLevelVariance(E: Float64Array, eo: number, O: Float64Array, oo: number, pw: Float64Array, bits: Int32Array, nf: number, out: Float64Array): void {
+  if (!LITTLE_ENDIAN) return mirroredPlain(E, eo, O, oo, nf, out);
+  let K1 = 0, K2 = 0, s1 = 0, q1 = 0, s2 = 0, q2 = 0;
+  for (let f = 0; f < nf; f++) {
+    const er = E[eo + 2 * f]!, ei = E[eo + 2 * f + 1]!, or = O[oo + 2 * f]!, oi = O[oo + 2 * f + 1]!;
+    const ar = er + or, ai = ei + oi, br = er - or, bi = ei - oi;
+    const p1 = ar * ar + ai * ai, p2 = br * br + bi * bi;
+    pw[0] = p1 > LN_FLOOR ? p1 : LN_FLOOR;
+    pw[1] = p2 > LN_FLOOR ? p2 : LN_FLOOR;
+    let hi = bits[1]!, E1 = hi >> 20, k = (hi >> 12) & 0xff;
+    let r = pw[0]! * EXPONENT[2 * E1]! * TABLE[2 * k]! - 1;
+    // ln p = e ln2 + ln c_k + (r - r^2/2 + r^3/3 - r^4/4)  (A&S 4.1.24)
+    const l1 = EXPONENT[2 * E1 + 1]! + TABLE[2 * k + 1]! + r * (1 - r * (0.5 - r * (1 / 3 - r * 0.25)));
+    hi = bits[3]!; E1 = hi >> 20; k = (hi >> 12) & 0xff;
+    r = pw[1]! * EXPONENT[2 * E1]! * TABLE[2 * k]! - 1;
+    const l2 = EXPONENT[2 * E1 + 1]! + TABLE[2 * k + 1]! + r * (1 - r * (0.5 - r * (1 / 3 - r * 0.25)));
+    // Shift by the first value: the variance of (l - K) is that of l and loses less to cancellation.
+    if (f === 0) { K1 = l1; K2 = l2; }
+    const d1 = l1 - K1, d2 = l2 - K2;
+    s1 += d1; q1 += d1 * d1; s2 += d2; q2 += d2 * d2;
+  }
+  const m1 = s1 / nf, m2 = s2 / nf;
+  out[0] = Math.max(0, q1 / nf - m1 * m1);
+  out[1] = Math.max(0, q2 / nf - m2 * m2);
+}
+
+function mirroredPlain(E: Float64Array, eo: number, O: Float64Array, oo: number, nf: number, out: Float64Array): void {
+  const l1 = new Float64Array(nf), l2 = new Float64Array(nf);
+  for (let f = 0; f < nf; f++) {
+    const er = E[eo + 2 * f]!, ei = E[eo + 2 * f + 1]!, or = O[oo + 2 * f]!, oi = O[oo + 2 * f + 1]!;
+    const ar = er + or, ai = ei + oi, br = er - or, bi = ei - oi;
+    l1[f] = Math.max(ar * ar + ai * ai, LN_FLOOR);
+    l2[f] = Math.max(br * br + bi * bi, LN_FLOOR);
+  }
+  const m = new Float64Array(2);
+  lnMomentsPlain(l1, 0, nf, m, 0);
+  out[0] = m[1]!;
+  lnMomentsPlain(l2, 0, nf, m, 0);
+  out[1] = m[1]!;
+}
+
 function lnMomentsPlain(p: Float64Array, start: number, count: number, out: Float64Array, at: number): void {
-  const K = Math.log(p[start]!);
+  const K = Math.log(Math.max(p[start]!, LN_FLOOR));
   let s = 0, s2 = 0;
-  for (let i = start; i < start + count; i++) { const d = Math.log(p[i]!) - K; s += d; s2 += d * d; }
+  for (let i = start; i < start + count; i++) { const d = Math.log(Math.max(p[i]!, LN_FLOOR)) - K; s += d; s2 += d * d; }
   const mean = s / count;
   out[at] = K + mean;
   out[at + 1] = Math.max(0, s2 / count - mean * mean);

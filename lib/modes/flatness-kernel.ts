@@ -1,154 +1,159 @@
 /**
  * The fast evaluation of the modal sum over a whole grid of receivers at one height (internal).
  *
- * Structure used (all exact rewritings of the CONTRACTS.md modal sum, no approximation):
+ * Structure used (exact rewritings of the CONTRACTS.md modal sum, no approximation):
  * 1. The mode shape factors per axis, psi_n(x, y, z0) = cos(nx pi x/Lx) cos(ny pi y/Ly) cos(nz pi z0/Lz),
  *    and every receiver shares z0, so the sum over nz collapses first into one complex spectrum per
- *    (nx, ny) pair: B[nx,ny](omega) = omega sum_nz cos(nz pi z0/Lz) S_n(omega) / (Lambda_n D_n(omega)).
- * 2. H(x, y) = sum_ny cos(ny pi y/Ly) G_ny(x), G_ny(x) = sum_nx cos(nx pi x/Lx) B[nx,ny]: two small dense
- *    products instead of one sum over all modes per receiver.
+ *    (nx, ny) pair: B[nx,ny](omega) = omega sum_nz cos(nz pi z0/Lz) S_n(omega) / (Lambda_n D_n(omega))
+ *    (built by the caller, flatness-map.ts).
+ * 2. H(x, y) = sum_ny cos(ny pi y/Ly) G_ny(x) with G_ny(x) = sum_nx cos(nx pi x/Lx) B[nx,ny]: two short
+ *    dense products (dense-rows.ts, four outputs per pass) instead of a sum over all modes per receiver.
  * 3. Cell centres are mirror-symmetric about the room's centre and cos(n pi (L - x)/L) = (-1)^n cos(n pi x/L):
  *    splitting each sum into even and odd indices gives a cell and its mirror image from one pass
  *    (E + O and E - O), in x and in y.
- * Typed arrays throughout, scratch allocated once, no allocation in the inner loops.
+ * 4. The level statistics use a table-driven logarithm fused with |H|^2 (fast-log.ts).
+ * Typed arrays throughout, scratch allocated once per call, no allocation in the loops.
  */
-import { lnMoments } from "./fast-log";
+import { dotKernel4, type DotKernel4 } from "./dense-rows";
+import { mirroredLevelVariance } from "./fast-log";
 import type { ProgressOptions } from "./types";
 import { throwIfAborted } from "./validate";
 
-/** Per (nx, ny) pair the complex spectrum B over the frequencies, layout [pair][2 f + (0 re | 1 im)]. */
+/** Per (nx, ny) pair the complex spectrum over the frequencies, B[pair * 2 nf + 2 f + (0 re | 1 im)]. */
 export interface PairSpectra {
   pairs: number;
   nx: Int32Array;
   ny: Int32Array;
-  B: Float64Array;
   nf: number;
-}
-
-/** out[t] = sum_k coef[k] * src[rows[k] + t] for t < W (a short dense product, unrolled by four). */
-function combineRows(out: Float64Array, src: Float64Array, rows: Int32Array, coef: Float64Array, count: number, W: number): void {
-  let k = 0;
-  if (count === 0) { out.fill(0, 0, W); return; }
-  // First group writes, later groups add.
-  if (count >= 4) {
-    const a = rows[0]!, b = rows[1]!, c = rows[2]!, d = rows[3]!;
-    const ca = coef[0]!, cb = coef[1]!, cc = coef[2]!, cd = coef[3]!;
-    for (let t = 0; t < W; t++) out[t] = ca * src[a + t]! + cb * src[b + t]! + cc * src[c + t]! + cd * src[d + t]!;
-    k = 4;
-  } else if (count >= 2) {
-    const a = rows[0]!, b = rows[1]!, ca = coef[0]!, cb = coef[1]!;
-    for (let t = 0; t < W; t++) out[t] = ca * src[a + t]! + cb * src[b + t]!;
-    k = 2;
-  } else {
-    const a = rows[0]!, ca = coef[0]!;
-    for (let t = 0; t < W; t++) out[t] = ca * src[a + t]!;
-    k = 1;
-  }
-  for (; k + 4 <= count; k += 4) {
-    const a = rows[k]!, b = rows[k + 1]!, c = rows[k + 2]!, d = rows[k + 3]!;
-    const ca = coef[k]!, cb = coef[k + 1]!, cc = coef[k + 2]!, cd = coef[k + 3]!;
-    for (let t = 0; t < W; t++) out[t] = out[t]! + ca * src[a + t]! + cb * src[b + t]! + cc * src[c + t]! + cd * src[d + t]!;
-  }
-  for (; k + 2 <= count; k += 2) {
-    const a = rows[k]!, b = rows[k + 1]!, ca = coef[k]!, cb = coef[k + 1]!;
-    for (let t = 0; t < W; t++) out[t] = out[t]! + ca * src[a + t]! + cb * src[b + t]!;
-  }
-  for (; k < count; k++) {
-    const a = rows[k]!, ca = coef[k]!;
-    for (let t = 0; t < W; t++) out[t] = out[t]! + ca * src[a + t]!;
-  }
+  B: Float64Array;
 }
 
 /** cos(n pi (i + 1/2) / N) for n < count, i < half, layout [n * half + i]: cell-centre cosines. */
 function cellCosines(count: number, N: number, half: number): Float64Array {
   const out = new Float64Array(count * half);
+  // psi factor at the cell centre x_i = (i + 1/2) L / N: cos(n pi x_i / L) = cos(n pi (i + 1/2) / N)
   for (let n = 0; n < count; n++) for (let i = 0; i < half; i++) out[n * half + i] = Math.cos((n * Math.PI * (i + 0.5)) / N);
   return out;
 }
 
+/** Pair lists per ny for one parity of nx: CSR-style starts, offsets into B and the nx of each. */
+function pairLists(spec: PairSpectra, NY: number, W: number, odd: 0 | 1) {
+  const start = new Int32Array(NY + 1);
+  for (let p = 0; p < spec.pairs; p++) if ((spec.nx[p]! & 1) === odd) start[spec.ny[p]! + 1] = start[spec.ny[p]! + 1]! + 1;
+  for (let y = 0; y < NY; y++) start[y + 1] = start[y + 1]! + start[y]!;
+  const rows = new Int32Array(Math.max(1, start[NY]!)), nx = new Int32Array(Math.max(1, start[NY]!));
+  const fill = start.slice(0, NY);
+  for (let p = 0; p < spec.pairs; p++) {
+    if ((spec.nx[p]! & 1) !== odd) continue;
+    const y = spec.ny[p]!, k = fill[y]!;
+    fill[y] = k + 1;
+    rows[k] = p * W;
+    nx[k] = spec.nx[p]!;
+  }
+  return { start, rows, nx };
+}
+
+/** Tables and scratch of step 3, shared by the rows of one call. */
+interface Step3 {
+  gEvenRows: Int32Array; gOddRows: Int32Array; cyE: Float64Array; cyO: Float64Array;
+  nyEven: number; nyOdd: number; hy: number; gridY: number; nf: number; W: number;
+  dotE: DotKernel4; dotO: DotKernel4;
+  accE: Float64Array; accO: Float64Array; pw: Float64Array; pwBits: Int32Array; variances: Float64Array; out: Float64Array;
+}
+
+/**
+ * Step 3 for one x row whose G matrix starts at G[g0]: for four y cells at a time, E and O (the sums
+ * over even and odd ny), then the level variance over frequency of E + O (cell j) and E - O (its
+ * mirror gridY - 1 - j).
+ */
+function step3Row(c: Step3, G: Float64Array, g0: number, ix: number): void {
+  const { gEvenRows, gOddRows, cyE, cyO, nyEven, nyOdd, hy, gridY, nf, W, dotE, dotO, accE, accO, pw, pwBits, variances, out } = c;
+  const toDb = 10 / Math.LN10; // 20 log10|H| = (10/ln 10) ln |H|^2
+  for (let j0 = 0; j0 < hy; j0 += 4) {
+    dotE(accE, 0, W, G, gEvenRows, 0, g0, cyE, j0 * nyEven, nyEven, W);
+    dotO(accO, 0, W, G, gOddRows, 0, g0, cyO, j0 * nyOdd, nyOdd, W);
+    for (let q = 0; q < 4 && j0 + q < hy; q++) {
+      const j = j0 + q, j2 = gridY - 1 - j;
+      mirroredLevelVariance(accE, q * W, accO, q * W, pw, pwBits, nf, variances);
+      out[ix * gridY + j] = toDb * Math.sqrt(variances[0]!);
+      if (j2 !== j) out[ix * gridY + j2] = toDb * Math.sqrt(variances[1]!);
+    }
+  }
+}
+
 /**
  * Population standard deviation over frequency of 20 log10 |H| at every cell centre of a gridX x gridY
- * grid, dB, index ix * gridY + iy (CONTRACTS.md flatnessMap).
+ * grid, dB, index ix * gridY + iy (CONTRACTS.md flatnessMap), from the pair spectra of step 1.
  */
 export function flatnessFromSpectra(spec: PairSpectra, gridX: number, gridY: number, progress: ProgressOptions): Float64Array {
   const { pairs, nf, B } = spec;
   const W = 2 * nf;
-  let NX = 0, NY = 0;
+  let NX = 1, NY = 1;
   for (let p = 0; p < pairs; p++) { NX = Math.max(NX, spec.nx[p]! + 1); NY = Math.max(NY, spec.ny[p]! + 1); }
   const hx = (gridX + 1) >> 1, hy = (gridY + 1) >> 1;
   const Cx = cellCosines(NX, gridX, hx), Cy = cellCosines(NY, gridY, hy);
+  const even = pairLists(spec, NY, W, 0), odd = pairLists(spec, NY, W, 1);
 
-  // Pair lists per ny, split by the parity of nx: offsets into B and the nx of each.
-  const evenStart = new Int32Array(NY + 1), oddStart = new Int32Array(NY + 1);
-  for (let p = 0; p < pairs; p++) {
-    const starts = spec.nx[p]! & 1 ? oddStart : evenStart;
-    starts[spec.ny[p]! + 1] = starts[spec.ny[p]! + 1]! + 1;
-  }
-  for (let y = 0; y < NY; y++) { evenStart[y + 1] = evenStart[y + 1]! + evenStart[y]!; oddStart[y + 1] = oddStart[y + 1]! + oddStart[y]!; }
-  const evenRows = new Int32Array(evenStart[NY]!), evenNx = new Int32Array(evenStart[NY]!);
-  const oddRows = new Int32Array(oddStart[NY]!), oddNx = new Int32Array(oddStart[NY]!);
-  const fillE = evenStart.slice(0, NY), fillO = oddStart.slice(0, NY);
-  for (let p = 0; p < pairs; p++) {
-    const y = spec.ny[p]!;
-    const fill = spec.nx[p]! & 1 ? fillO : fillE;
-    const k = fill[y]!;
-    fill[y] = k + 1;
-    (spec.nx[p]! & 1 ? oddRows : evenRows)[k] = p * W;
-    (spec.nx[p]! & 1 ? oddNx : evenNx)[k] = spec.nx[p]!;
-  }
-  // Row offsets of G for even and odd ny.
+  // Step 3: rows of G by parity of ny; y-cosines per cell, padded to a multiple of four cells.
   const nyEven = (NY + 1) >> 1, nyOdd = NY >> 1;
-  const gEvenRows = new Int32Array(nyEven), gOddRows = new Int32Array(nyOdd);
+  const gEvenRows = new Int32Array(Math.max(1, nyEven)), gOddRows = new Int32Array(Math.max(1, nyOdd));
   for (let y = 0; y < NY; y++) (y & 1 ? gOddRows : gEvenRows)[y >> 1] = y * W;
+  const hy4 = Math.ceil(hy / 4) * 4;
+  const cyE = new Float64Array(hy4 * Math.max(1, nyEven)), cyO = new Float64Array(hy4 * Math.max(1, nyOdd));
+  for (let j = 0; j < hy; j++) {
+    for (let k = 0; k < nyEven; k++) cyE[j * nyEven + k] = Cy[2 * k * hy + j]!;
+    for (let k = 0; k < nyOdd; k++) cyO[j * nyOdd + k] = Cy[(2 * k + 1) * hy + j]!;
+  }
 
-  const G1 = new Float64Array(Math.max(1, NY) * W), G2 = new Float64Array(Math.max(1, NY) * W);
-  const rowE = new Float64Array(W), rowO = new Float64Array(W);
-  const accE = new Float64Array(W), accO = new Float64Array(W);
-  const coef = new Float64Array(Math.max(NX, NY, 1));
-  const pw = new Float64Array(2 * nf), pwBits = new Int32Array(pw.buffer);
-  const moments = new Float64Array(2);
-  const out = new Float64Array(gridX * gridY);
-  const toDb = 10 / Math.LN10; // 20 log10|H| = (10/ln 10) ln |H|^2
+  // Step 2 works on four x-halves at once; each gives two G matrices (the row and its mirror).
+  let maxList = 1;
+  for (let y = 0; y < NY; y++) maxList = Math.max(maxList, even.start[y + 1]! - even.start[y]!, odd.start[y + 1]! - odd.start[y]!);
+  const coefX = new Float64Array(4 * maxList);
+  const stepE = Array.from({ length: NY }, (_, y) => dotKernel4(even.start[y + 1]! - even.start[y]!));
+  const stepO = Array.from({ length: NY }, (_, y) => dotKernel4(odd.start[y + 1]! - odd.start[y]!));
+  const G = new Float64Array(8 * NY * W);
+  const rowE = new Float64Array(4 * W), rowO = new Float64Array(4 * W);
+  const ctx: Step3 = {
+    gEvenRows, gOddRows, cyE, cyO, nyEven, nyOdd, hy, gridY, nf, W,
+    dotE: dotKernel4(nyEven), dotO: dotKernel4(nyOdd),
+    accE: new Float64Array(4 * W), accO: new Float64Array(4 * W),
+    pw: new Float64Array(2), pwBits: new Int32Array(0), variances: new Float64Array(2), out: new Float64Array(gridX * gridY),
+  };
+  ctx.pwBits = new Int32Array(ctx.pw.buffer);
 
-  for (let i = 0; i < hx; i++) {
+  const groups = Math.ceil(hx / 4);
+  for (let gI = 0; gI < groups; gI++) {
     throwIfAborted(progress.signal);
-    const i2 = gridX - 1 - i;
-    // G_ny(x_i) = sum_nx cos(nx pi x_i/Lx) B[nx,ny], even and odd nx apart (mirror: even - odd).
+    const i0 = 4 * gI;
+    // Step 2: G_ny(x_i) = sum_nx cos(nx pi x_i/Lx) B[nx,ny], even and odd nx apart; the mirror row is even - odd.
     for (let y = 0; y < NY; y++) {
-      const e0 = evenStart[y]!, ne = evenStart[y + 1]! - e0;
-      for (let k = 0; k < ne; k++) coef[k] = Cx[evenNx[e0 + k]! * hx + i]!;
-      combineRows(rowE, B, evenRows.subarray(e0), coef, ne, W);
-      const o0 = oddStart[y]!, no = oddStart[y + 1]! - o0;
-      for (let k = 0; k < no; k++) coef[k] = Cx[oddNx[o0 + k]! * hx + i]!;
-      combineRows(rowO, B, oddRows.subarray(o0), coef, no, W);
-      const g = y * W;
-      for (let t = 0; t < W; t++) { const e = rowE[t]!, o = rowO[t]!; G1[g + t] = e + o; G2[g + t] = e - o; }
-    }
-    for (let side = 0; side < (i2 === i ? 1 : 2); side++) {
-      const G = side === 0 ? G1 : G2;
-      const ix = side === 0 ? i : i2;
-      for (let j = 0; j < hy; j++) {
-        const j2 = gridY - 1 - j;
-        for (let k = 0; k < nyEven; k++) coef[k] = Cy[2 * k * hy + j]!;
-        combineRows(accE, G, gEvenRows, coef, nyEven, W);
-        for (let k = 0; k < nyOdd; k++) coef[k] = Cy[(2 * k + 1) * hy + j]!;
-        combineRows(accO, G, gOddRows, coef, nyOdd, W);
-        // Cell j gets E + O, its mirror j2 gets E - O.
-        for (let f = 0; f < nf; f++) {
-          const er = accE[2 * f]!, ei = accE[2 * f + 1]!, or = accO[2 * f]!, oi = accO[2 * f + 1]!;
-          const ar = er + or, ai = ei + oi, br = er - or, bi = ei - oi;
-          pw[f] = ar * ar + ai * ai;
-          pw[nf + f] = br * br + bi * bi;
-        }
-        lnMoments(pw, pwBits, 0, nf, moments, 0);
-        out[ix * gridY + j] = toDb * Math.sqrt(moments[1]!);
-        if (j2 !== j) {
-          lnMoments(pw, pwBits, nf, nf, moments, 0);
-          out[ix * gridY + j2] = toDb * Math.sqrt(moments[1]!);
+      const e0 = even.start[y]!, ne = even.start[y + 1]! - e0;
+      const o0 = odd.start[y]!, no = odd.start[y + 1]! - o0;
+      for (let q = 0; q < 4; q++) {
+        const i = Math.min(i0 + q, hx - 1);
+        for (let k = 0; k < ne; k++) coefX[q * maxList + k] = Cx[even.nx[e0 + k]! * hx + i]!;
+      }
+      stepE[y]!(rowE, 0, W, B, even.rows, e0, 0, coefX, 0, maxList, W);
+      for (let q = 0; q < 4; q++) {
+        const i = Math.min(i0 + q, hx - 1);
+        for (let k = 0; k < no; k++) coefX[q * maxList + k] = Cx[odd.nx[o0 + k]! * hx + i]!;
+      }
+      stepO[y]!(rowO, 0, W, B, odd.rows, o0, 0, coefX, 0, maxList, W);
+      for (let q = 0; q < 4; q++) {
+        const g1 = (2 * q * NY + y) * W, g2 = ((2 * q + 1) * NY + y) * W, r = q * W;
+        for (let t = 0; t < W; t++) {
+          const e = rowE[r + t]!, o = rowO[r + t]!;
+          G[g1 + t] = e + o;
+          G[g2 + t] = e - o;
         }
       }
     }
-    progress.onProgress?.((i + 1) / hx);
+    for (let q = 0; q < 4 && i0 + q < hx; q++) {
+      const i = i0 + q, i2 = gridX - 1 - i;
+      step3Row(ctx, G, 2 * q * NY * W, i);
+      if (i2 !== i) step3Row(ctx, G, (2 * q + 1) * NY * W, i2);
+    }
+    progress.onProgress?.((gI + 1) / groups);
   }
-  return out;
+  return ctx.out;
 }

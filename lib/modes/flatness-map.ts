@@ -40,8 +40,8 @@ export interface FlatnessGridOptions extends ProgressOptions {
  * B[nx,ny](omega) = omega sum_nz cos(nz pi z0/Lz) S_n(omega) / (Lambda_n (omega^2 - omega_n^2 - 2j delta omega_n)),
  * with S_n(omega) = sum_s p_s e^{-j omega tau_s} psi_n(r_s).
  */
-function pairSpectra(room: RectRoom, set: ModeSet, sources: SoundSource[], z0: number, freqs: ArrayLike<number>, t60: number): PairSpectra {
-  const nf = freqs.length, W = 2 * nf, M = set.count, S = sources.length;
+export function pairSpectra(room: RectRoom, set: ModeSet, sources: SoundSource[], z0: number, freqs: ArrayLike<number>, t60: number): PairSpectra {
+  const nf = freqs.length, M = set.count, S = sources.length;
   const omega = angular(freqs);
   const delta = dampingConstant(t60);
   const lamInv = inverseNorms(set);
@@ -60,6 +60,7 @@ function pairSpectra(room: RectRoom, set: ModeSet, sources: SoundSource[], z0: n
   const pairs = pnx.length;
   if (pairs * nf > LIMITS.maxPairFrequencyProducts)
     throw new RangeError(`maxModeFrequencyHz: this room, ${nf} frequencies and modes up to ${set.frequencyHz[M - 1]!.toFixed(1)} Hz need ${pairs} x ${nf} spectra; the limit is ${LIMITS.maxPairFrequencyProducts}`);
+  const W = 2 * nf;
   const B = new Float64Array(pairs * W);
   const kz = (Math.PI * z0) / room.heightM;
   for (let n = 0; n < M; n++) {
@@ -93,7 +94,7 @@ function pairSpectra(room: RectRoom, set: ModeSet, sources: SoundSource[], z0: n
       }
     }
   }
-  return { pairs, nx: Int32Array.from(pnx), ny: Int32Array.from(pny), B, nf };
+  return { pairs, nx: Int32Array.from(pnx), ny: Int32Array.from(pny), nf, B };
 }
 
 function checkGridOptions(room: RectRoom, o: FlatnessGridOptions) {
