@@ -67,16 +67,17 @@ export function mirroredLevelVariance(E: Float64Array, eo: number, O: Float64Arr
   for (let f = 0; f < nf; f++) {
     const er = E[eo + 2 * f]!, ei = E[eo + 2 * f + 1]!, or = O[oo + 2 * f]!, oi = O[oo + 2 * f + 1]!;
     const ar = er + or, ai = ei + oi, br = er - or, bi = ei - oi;
-    const p1 = ar * ar + ai * ai, p2 = br * br + bi * bi;
-    pw[0] = p1 > LN_FLOOR ? p1 : LN_FLOOR;
-    pw[1] = p2 > LN_FLOOR ? p2 : LN_FLOOR;
-    let hi = bits[1]!, E1 = hi >> 20, k = (hi >> 12) & 0xff;
-    let r = pw[0]! * EXPONENT[2 * E1]! * TABLE[2 * k]! - 1;
+    let p1 = ar * ar + ai * ai, p2 = br * br + bi * bi;
+    if (!(p1 > LN_FLOOR)) p1 = LN_FLOOR;
+    if (!(p2 > LN_FLOOR)) p2 = LN_FLOOR;
+    pw[0] = p1;
+    pw[1] = p2;
+    const h1 = bits[1]!, h2 = bits[3]!;
+    const x1 = (h1 >> 19) & 0xffe, k1 = (h1 >> 11) & 0x1fe, x2 = (h2 >> 19) & 0xffe, k2 = (h2 >> 11) & 0x1fe;
+    const r1 = p1 * EXPONENT[x1]! * TABLE[k1]! - 1, r2 = p2 * EXPONENT[x2]! * TABLE[k2]! - 1;
     // ln p = e ln2 + ln c_k + (r - r^2/2 + r^3/3 - r^4/4)  (A&S 4.1.24)
-    const l1 = EXPONENT[2 * E1 + 1]! + TABLE[2 * k + 1]! + r * (1 - r * (0.5 - r * (1 / 3 - r * 0.25)));
-    hi = bits[3]!; E1 = hi >> 20; k = (hi >> 12) & 0xff;
-    r = pw[1]! * EXPONENT[2 * E1]! * TABLE[2 * k]! - 1;
-    const l2 = EXPONENT[2 * E1 + 1]! + TABLE[2 * k + 1]! + r * (1 - r * (0.5 - r * (1 / 3 - r * 0.25)));
+    const l1 = EXPONENT[x1 + 1]! + TABLE[k1 + 1]! + r1 * (1 - r1 * (0.5 - r1 * (1 / 3 - r1 * 0.25)));
+    const l2 = EXPONENT[x2 + 1]! + TABLE[k2 + 1]! + r2 * (1 - r2 * (0.5 - r2 * (1 / 3 - r2 * 0.25)));
     // Shift by the first value: the variance of (l - K) is that of l and loses less to cancellation.
     if (f === 0) { K1 = l1; K2 = l2; }
     const d1 = l1 - K1, d2 = l2 - K2;

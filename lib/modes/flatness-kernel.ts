@@ -7,14 +7,14 @@
  *    (nx, ny) pair: B[nx,ny](omega) = omega sum_nz cos(nz pi z0/Lz) S_n(omega) / (Lambda_n D_n(omega))
  *    (built by the caller, flatness-map.ts).
  * 2. H(x, y) = sum_ny cos(ny pi y/Ly) G_ny(x) with G_ny(x) = sum_nx cos(nx pi x/Lx) B[nx,ny]: two short
- *    dense products (dense-rows.ts, four outputs per pass) instead of a sum over all modes per receiver.
+ *    dense products (dense-rows.ts, four or eight outputs per pass) instead of a sum over all modes per receiver.
  * 3. Cell centres are mirror-symmetric about the room's centre and cos(n pi (L - x)/L) = (-1)^n cos(n pi x/L):
  *    splitting each sum into even and odd indices gives a cell and its mirror image from one pass
  *    (E + O and E - O), in x and in y.
  * 4. The level statistics use a table-driven logarithm fused with |H|^2 (fast-log.ts).
  * Typed arrays throughout, scratch allocated once per call, no allocation in the loops.
  */
-import { dotKernel4, type DotKernel4 } from "./dense-rows";
+import { dotKernel, type DotKernel } from "./dense-rows";
 import { mirroredLevelVariance } from "./fast-log";
 import type { ProgressOptions } from "./types";
 import { throwIfAborted } from "./validate";
@@ -57,22 +57,22 @@ function pairLists(spec: PairSpectra, NY: number, W: number, odd: 0 | 1) {
 interface Step3 {
   gEvenRows: Int32Array; gOddRows: Int32Array; cyE: Float64Array; cyO: Float64Array;
   nyEven: number; nyOdd: number; hy: number; gridY: number; nf: number; W: number;
-  dotE: DotKernel4; dotO: DotKernel4;
+  dotE: DotKernel; dotO: DotKernel;
   accE: Float64Array; accO: Float64Array; pw: Float64Array; pwBits: Int32Array; variances: Float64Array; out: Float64Array;
 }
 
 /**
- * Step 3 for one x row whose G matrix starts at G[g0]: for four y cells at a time, E and O (the sums
+ * Step 3 for one x row whose G matrix starts at G[g0]: for eight y cells at a time, E and O (the sums
  * over even and odd ny), then the level variance over frequency of E + O (cell j) and E - O (its
  * mirror gridY - 1 - j).
  */
 function step3Row(c: Step3, G: Float64Array, g0: number, ix: number): void {
   const { gEvenRows, gOddRows, cyE, cyO, nyEven, nyOdd, hy, gridY, nf, W, dotE, dotO, accE, accO, pw, pwBits, variances, out } = c;
   const toDb = 10 / Math.LN10; // 20 log10|H| = (10/ln 10) ln |H|^2
-  for (let j0 = 0; j0 < hy; j0 += 4) {
+  for (let j0 = 0; j0 < hy; j0 += 8) {
     dotE(accE, 0, W, G, gEvenRows, 0, g0, cyE, j0 * nyEven, nyEven, W);
     dotO(accO, 0, W, G, gOddRows, 0, g0, cyO, j0 * nyOdd, nyOdd, W);
-    for (let q = 0; q < 4 && j0 + q < hy; q++) {
+    for (let q = 0; q < 8 && j0 + q < hy; q++) {
       const j = j0 + q, j2 = gridY - 1 - j;
       mirroredLevelVariance(accE, q * W, accO, q * W, pw, pwBits, nf, variances);
       out[ix * gridY + j] = toDb * Math.sqrt(variances[0]!);
@@ -94,12 +94,12 @@ export function flatnessFromSpectra(spec: PairSpectra, gridX: number, gridY: num
   const Cx = cellCosines(NX, gridX, hx), Cy = cellCosines(NY, gridY, hy);
   const even = pairLists(spec, NY, W, 0), odd = pairLists(spec, NY, W, 1);
 
-  // Step 3: rows of G by parity of ny; y-cosines per cell, padded to a multiple of four cells.
+  // Step 3: rows of G by parity of ny; y-cosines per cell, padded to a multiple of eight cells.
   const nyEven = (NY + 1) >> 1, nyOdd = NY >> 1;
   const gEvenRows = new Int32Array(Math.max(1, nyEven)), gOddRows = new Int32Array(Math.max(1, nyOdd));
   for (let y = 0; y < NY; y++) (y & 1 ? gOddRows : gEvenRows)[y >> 1] = y * W;
-  const hy4 = Math.ceil(hy / 4) * 4;
-  const cyE = new Float64Array(hy4 * Math.max(1, nyEven)), cyO = new Float64Array(hy4 * Math.max(1, nyOdd));
+  const hy8 = Math.ceil(hy / 8) * 8;
+  const cyE = new Float64Array(hy8 * Math.max(1, nyEven)), cyO = new Float64Array(hy8 * Math.max(1, nyOdd));
   for (let j = 0; j < hy; j++) {
     for (let k = 0; k < nyEven; k++) cyE[j * nyEven + k] = Cy[2 * k * hy + j]!;
     for (let k = 0; k < nyOdd; k++) cyO[j * nyOdd + k] = Cy[(2 * k + 1) * hy + j]!;
@@ -109,14 +109,14 @@ export function flatnessFromSpectra(spec: PairSpectra, gridX: number, gridY: num
   let maxList = 1;
   for (let y = 0; y < NY; y++) maxList = Math.max(maxList, even.start[y + 1]! - even.start[y]!, odd.start[y + 1]! - odd.start[y]!);
   const coefX = new Float64Array(4 * maxList);
-  const stepE = Array.from({ length: NY }, (_, y) => dotKernel4(even.start[y + 1]! - even.start[y]!));
-  const stepO = Array.from({ length: NY }, (_, y) => dotKernel4(odd.start[y + 1]! - odd.start[y]!));
+  const stepE = Array.from({ length: NY }, (_, y) => dotKernel(even.start[y + 1]! - even.start[y]!, 4));
+  const stepO = Array.from({ length: NY }, (_, y) => dotKernel(odd.start[y + 1]! - odd.start[y]!, 4));
   const G = new Float64Array(8 * NY * W);
   const rowE = new Float64Array(4 * W), rowO = new Float64Array(4 * W);
   const ctx: Step3 = {
     gEvenRows, gOddRows, cyE, cyO, nyEven, nyOdd, hy, gridY, nf, W,
-    dotE: dotKernel4(nyEven), dotO: dotKernel4(nyOdd),
-    accE: new Float64Array(4 * W), accO: new Float64Array(4 * W),
+    dotE: dotKernel(nyEven, 8), dotO: dotKernel(nyOdd, 8),
+    accE: new Float64Array(8 * W), accO: new Float64Array(8 * W),
     pw: new Float64Array(2), pwBits: new Int32Array(0), variances: new Float64Array(2), out: new Float64Array(gridX * gridY),
   };
   ctx.pwBits = new Int32Array(ctx.pw.buffer);
