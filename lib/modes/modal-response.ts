@@ -30,7 +30,7 @@ export interface ModalResponseOptions {
  * @example
  * modalResponse({ lengthM: 5, widthM: 4, heightM: 3 },
  *   { source: [0, 0, 0], receiver: [5, 4, 3], frequenciesHz: [34.3], rt60Seconds: 0.5, maxModeFrequencyHz: 200 })
- * // one level, dB, at the first length mode
+ * // [-22.39] dB at the first length mode (compare levels with each other: the offset is free)
  */
 export function modalResponse(room: RectRoom, options: ModalResponseOptions): number[] {
   if (typeof options !== "object" || options === null) throw new TypeError("options must be an object");

@@ -37,7 +37,7 @@ export function asymptoticModeCount(room: RectRoom, frequencyHz: number, speedOf
  *
  * dN/df = 4 pi V f^2 / c^3 + pi S f / (2 c^2) + L / (8 c) (derivative of Kuttruff's N(f))
  *
- * @example modalDensity({ lengthM: 5, widthM: 4, heightM: 3 }, 100) // 0.52 modes per Hz
+ * @example modalDensity({ lengthM: 5, widthM: 4, heightM: 3 }, 100) // 0.33 modes per Hz
  */
 export function modalDensity(room: RectRoom, frequencyHz: number, speedOfSound = 343): number {
   checkRoom(room);

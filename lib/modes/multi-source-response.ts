@@ -50,7 +50,7 @@ export function prepareResponse(room: RectRoom, o: MultiSourceResponseOptions) {
  * multiSourceResponse({ lengthM: 5, widthM: 4, heightM: 3 }, {
  *   sources: [{ position: [0, 0, 0] }, { position: [5, 0, 0], delayMs: 1.5, polarity: -1 }],
  *   receivers: [[2.5, 2.2, 1.1]], frequenciesHz: [30, 40, 50], rt60Seconds: 0.4, maxModeFrequencyHz: 200,
- * }) // [[l30, l40, l50]] in dB
+ * }) // [[-53.35, -48.30, -74.66]] dB
  */
 export function multiSourceResponse(room: RectRoom, options: MultiSourceResponseOptions): number[][] {
   const { sources, receivers, freqs, t60, set } = prepareResponse(room, options);

@@ -4,7 +4,12 @@ import { checkFrequency, checkRoom, checkSpeedOfSound } from "./validate";
 
 const KINDS: ModeKind[] = ["axial", "axial", "tangential", "oblique"];
 
-/** Axial, tangential or oblique by the number of non-zero indices (1, 2, 3). */
+/**
+ * Axial, tangential or oblique by the number of non-zero indices (1, 2, 3); (0,0,0) counts as axial
+ * here but is never listed by roomModes.
+ *
+ * @example modeKind(1, 1, 0) // "tangential"
+ */
 export const modeKind = (nx: number, ny: number, nz: number): ModeKind =>
   KINDS[(nx > 0 ? 1 : 0) + (ny > 0 ? 1 : 0) + (nz > 0 ? 1 : 0)]!;
 

@@ -11,7 +11,10 @@ import { LIMITS } from "./limits";
 const dimension = (axis: string, name: string) =>
   z.number().positive().max(LIMITS.maxDimensionM).describe(`Room ${name} along ${axis}, m: finite, > 0 and <= ${LIMITS.maxDimensionM}`);
 
-/** A rectangular room, m (x = length, y = width, z = height). */
+/**
+ * A rectangular room, m (x = length, y = width, z = height).
+ * @example rectRoomSchema.parse({ lengthM: 5, widthM: 4, heightM: 3 })
+ */
 export const rectRoomSchema = z
   .object({ lengthM: dimension("x", "length"), widthM: dimension("y", "width"), heightM: dimension("z", "height") })
   .describe("Rectangular room with rigid walls; dimensions in metres (x = length, y = width, z = height)")
@@ -67,7 +70,10 @@ function heightInside(ctx: z.RefinementCtx, room: Room, h: number, path: string)
   if (h > room.heightM) ctx.addIssue({ code: "custom", path: [path], message: `must lie inside the room: 0 <= z <= ${room.heightM} m` });
 }
 
-/** Body of POST /api/v1/modes: the arguments of roomModes. */
+/**
+ * Body of POST /api/v1/modes: the arguments of roomModes (rt60Seconds optional, for a mode table).
+ * @example modesRequestSchema.parse({ room: { lengthM: 5, widthM: 4, heightM: 3 }, maxFrequencyHz: 100 }) // speedOfSound 343 added
+ */
 export const modesRequestSchema = z
   .object({
     room: rectRoomSchema,
@@ -77,7 +83,11 @@ export const modesRequestSchema = z
   })
   .describe("Room modes up to a frequency: roomModes(room, { maxFrequencyHz, speedOfSound })");
 
-/** Body of POST /api/v1/modes/response: the arguments of modalResponse. */
+/**
+ * Body of POST /api/v1/modes/response: the arguments of modalResponse.
+ * @example modalResponseRequestSchema.parse({ room, source: [0, 0, 0], receiver: [5, 4, 3], frequenciesHz: [34.3],
+ *   rt60Seconds: 0.5, maxModeFrequencyHz: 200 })
+ */
 export const modalResponseRequestSchema = z
   .object({
     room: rectRoomSchema,
@@ -122,7 +132,11 @@ const gridFields = {
   maxModeFrequencyHz: maxModeFrequencySchema,
 };
 
-/** Body of POST /api/v1/modes/flatness-map: the arguments of flatnessMap (without the callbacks). */
+/**
+ * Body of POST /api/v1/modes/flatness-map: the arguments of flatnessMap (without the callbacks).
+ * @example flatnessMapRequestSchema.parse({ room, source: [0.3, 0.3, 0.3], heightM: 1.2, gridX: 72, gridY: 51,
+ *   frequenciesHz: logSpacedFrequencies(20, 120, 96), rt60Seconds: 0.4, maxModeFrequencyHz: 200 })
+ */
 export const flatnessMapRequestSchema = z
   .object({ ...gridFields, source: pointSchema.describe("Source position [x, y, z], m") })
   .superRefine((b, ctx) => {

@@ -58,7 +58,7 @@ export interface SeatRankingOptions {
  * @throws TypeError / RangeError naming the field
  * @example
  * rankSeatPositions({ lengthM: 6, widthM: 4.2, heightM: 2.8 }, { sources: [{ position: [0, 0, 0] }],
- *   seatYM: 2.1, earHeightM: 1.1, candidateCount: 12, rt60Seconds: 0.4 }).best.xM // the flattest x, m
+ *   seatYM: 2.1, earHeightM: 1.1, candidateCount: 12, rt60Seconds: 0.4 }).best // { xM: 5.75, stdDevDb: 5.16 }
  */
 export function rankSeatPositions(room: RectRoom, options: SeatRankingOptions): SeatRanking {
   checkRoom(room);
