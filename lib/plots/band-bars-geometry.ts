@@ -57,8 +57,9 @@ export interface BandBarsGeometry extends CartesianFrame {
   bars: DrawnBar[];
   /** stepped lines, one per scenario (mode "steps") */
   steps: { scenario: number; path: string }[];
-  /** shaded target region and its middle line (dashed), as path strings */
+  /** shaded target region (fill only), its upper and lower edges as stepped lines, and its middle line */
   targetArea: string;
+  targetEdges: string;
   targetLine: string;
   verdictMarkers: (PointMarker & { verdict: Verdict; scenario: number; band: number })[];
   hoverX: number[];
@@ -141,7 +142,8 @@ export function bandBarsGeometry(input: BandBarsInput, size: { width: number; ar
         open = true;
         // Spread markers of several scenarios across the band so they do not overlap.
         markerX = slot.x0 + ((slot.x1 - slot.x0) * (si + 1)) / (groups + 1);
-        markerTop = yv;
+        // On the line itself (+8 cancels the lift above bars below): the line's dash tells whose verdict it is.
+        markerTop = yv + 8;
       } else open = false;
       const verdict = s.verdicts?.[b];
       if (ok && verdict) {
@@ -151,15 +153,19 @@ export function bandBarsGeometry(input: BandBarsInput, size: { width: number; ar
     });
     if (mode === "steps") steps.push({ scenario: si, path: d });
   });
-  let targetArea = "", targetLine = "";
+  let targetArea = "", targetLine = "", upper = "", lower = "";
   if (input.target) {
     input.target.forEach((t, b) => {
       const slot = slots[b]!;
       const y0 = r2(y.map(t.upperS)), y1 = r2(y.map(t.lowerS));
       targetArea += `M${r2(slot.x0)},${y0}H${r2(slot.x1)}V${y1}H${r2(slot.x0)}Z`;
+      // Edges continue from band to band (a vertical join where the limit changes), so the region reads as one.
+      upper += `${b === 0 ? "M" : "L"}${r2(slot.x0)},${y0}H${r2(slot.x1)}`;
+      lower += `${b === 0 ? "M" : "L"}${r2(slot.x0)},${y1}H${r2(slot.x1)}`;
       if (t.targetS !== undefined) targetLine += `M${r2(slot.x0)},${r2(y.map(t.targetS))}H${r2(slot.x1)}`;
     });
   }
+  const targetEdges = upper + lower;
   const columns = [{ label: "Band", unit: "Hz" }, ...input.scenarios.flatMap((s) => [{ label: s.label, unit }, ...(s.verdicts ? [{ label: `${s.label} verdict` }] : [])])];
   if (input.target) columns.push({ label: "Target lower", unit }, { label: "Target upper", unit });
   const rows = input.bandsHz.map((f, b) => {
@@ -177,5 +183,5 @@ export function bandBarsGeometry(input: BandBarsInput, size: { width: number; ar
     `${input.scenarios.length} ${input.scenarios.length === 1 ? "scenario" : "scenarios"} over ${n} bands from ${formatFrequencyHz(input.bandsHz[0]!)} to ${formatFrequencyHz(input.bandsHz[n - 1]!)} Hz` +
     (values.length ? `, ${formatValue(Math.min(...values), 2)} to ${formatValue(Math.max(...values), 2)} ${unit}` : "") +
     (usedVerdicts.size ? `; band verdicts ${counts.join(", ")}.` : ".");
-  return { ...frame, slots, styles, bars, steps, targetArea, targetLine, verdictMarkers, hoverX: slots.map((s) => s.centre), table: { columns, rows }, summary };
+  return { ...frame, slots, styles, bars, steps, targetArea, targetEdges, targetLine, verdictMarkers, hoverX: slots.map((s) => s.centre), table: { columns, rows }, summary };
 }

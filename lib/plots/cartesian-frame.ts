@@ -35,6 +35,8 @@ export interface CartesianFrameInput {
   legendItems: readonly LegendItem[];
   /** extra left margin labels, e.g. lane names, when they are not the y ticks */
   yLabelsForMargin?: readonly string[];
+  /** space above the plot area, px (default 12; more when labels sit above the area) */
+  topPx?: number;
 }
 
 /**
@@ -51,15 +53,16 @@ export function cartesianFrame(input: CartesianFrameInput): CartesianFrame {
   const areaWidth = Math.max(40, width - left - RIGHT_PX);
   const legend = legendLayout(input.legendItems, Math.max(60, width - left));
   const bottom = X_AXIS_BAND_PX + (legend.height > 0 ? LEGEND_GAP_PX + legend.height : 0) + 4;
-  const height = TOP_PX + input.areaHeight + bottom;
-  const area = plotArea(width, height, { top: TOP_PX, right: width - left - areaWidth, bottom, left });
+  const top = input.topPx ?? TOP_PX;
+  const height = top + input.areaHeight + bottom;
+  const area = plotArea(width, height, { top, right: width - left - areaWidth, bottom, left });
   return {
     width,
     height,
     area,
     xAxis: { orientation: "bottom", length: area.width, ticks: input.xTicks(area.width), title: input.xTitle },
     yAxis: { orientation: "left", length: area.height, ticks: yTicks, title: input.yTitle },
-    legend: { ...legend, x: left, y: TOP_PX + input.areaHeight + X_AXIS_BAND_PX + LEGEND_GAP_PX },
+    legend: { ...legend, x: left, y: top + input.areaHeight + X_AXIS_BAND_PX + LEGEND_GAP_PX },
   };
 }
 

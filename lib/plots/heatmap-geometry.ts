@@ -77,7 +77,8 @@ export function heatmapGeometry(input: HeatmapInput, size: { width: number; maxA
   }
   if (lo === Infinity) { lo = 0; hi = 0; }
   const ramp = colourRamp(input.domain ?? [lo, hi], { name: input.ramp ?? "cividis" });
-  const yTicksProbe = linearScale([0, widthM], [0, 100], { nice: false }).ticks.map((t) => t.label);
+  // The finest labels the y axis can get (count 10), so the margin always fits them.
+  const yTicksProbe = linearScale([0, widthM], [0, 100], { nice: false, count: 10 }).ticks.map((t) => t.label);
   const left = leftMarginFor(yTicksProbe);
   const right = 16, top = 12, axisBand = 40, barBand = 58;
   const maxAreaHeight = size.maxAreaHeight ?? 420;
@@ -98,8 +99,17 @@ export function heatmapGeometry(input: HeatmapInput, size: { width: number; maxA
       const y0 = r2(iy * ch * pxPerM), y1 = r2((iy + 1) * ch * pxPerM);
       cells.push({ ix, iy, x: x0, y: y0, width: r2(x1 - x0), height: r2(y1 - y0), fill: ramp.colour(value), value });
     }
-  const barWidth = Math.min(320, Math.max(120, areaW * 0.6));
-  const colourBar = { x: left, y: top + areaH + axisBand + 20, width: barWidth, height: 10, title: `${input.valueTitle} (${input.valueUnit})`, ticks: colourLegendTicks(ramp, barWidth, Math.max(2, Math.floor(barWidth / 60))) };
+  // Beside the map when the width leaves room for it (a wide screen with a height-capped map), else below.
+  const beside = size.width - (left + areaW + right) >= 260;
+  const barWidth = beside ? 200 : Math.min(320, Math.max(120, areaW * 0.6));
+  const colourBar = {
+    x: beside ? left + areaW + 36 : left,
+    y: beside ? top + 28 : top + areaH + axisBand + 20,
+    width: barWidth,
+    height: 10,
+    title: `${input.valueTitle} (${input.valueUnit})`,
+    ticks: colourLegendTicks(ramp, barWidth, Math.max(2, Math.floor(barWidth / 50))),
+  };
   const at = (i: number) => ({ value: values[i] ?? 0, ix: Math.floor(i / gridY), iy: i % gridY });
   const min = at(imin), max = at(imax);
   const rows: PlotCell[][] = [];
@@ -108,7 +118,7 @@ export function heatmapGeometry(input: HeatmapInput, size: { width: number; maxA
   const summary = `${input.valueTitle} over a ${formatValue(lengthM, 2)} × ${formatValue(widthM, 2)} m floor plan in ${gridX} × ${gridY} cells: lowest ${formatValue(min.value, 1)} ${u} at x ${formatValue(xM[min.ix]!, 2)} m, y ${formatValue(yM[min.iy]!, 2)} m; highest ${formatValue(max.value, 1)} ${u} at x ${formatValue(xM[max.ix]!, 2)} m, y ${formatValue(yM[max.iy]!, 2)} m.`;
   return {
     width: Math.max(size.width, left + areaW + right),
-    height: top + areaH + axisBand + barBand,
+    height: top + areaH + axisBand + (beside ? 0 : barBand),
     area,
     pxPerM,
     xAxis: { orientation: "bottom", length: areaW, ticks: xs.ticks, title: "Length x (m)" },

@@ -42,6 +42,8 @@ export interface ModeStem {
   modes: PlotMode[];
   /** bandwidth bar of the stem's first mode, px (absent without bandwidthHz) */
   bar?: { x0: number; x1: number; y: number; height: number };
+  /** whether the "×n" count of a shared stem is drawn (skipped where it would touch the previous one) */
+  countLabel: boolean;
 }
 
 /** Geometry of a mode-spectrum plot: three lanes (axial, tangential, oblique) of stems over frequency. */
@@ -87,7 +89,8 @@ export function modeSpectrumGeometry(input: ModeSpectrumInput, size: { width: nu
     linear
       ? (() => { const s = linearScale(domainHz, [0, w], { nice: false, count: Math.max(2, Math.floor(w / 70)) }); return { map: s.map, ticks: s.ticks.map((t) => ({ ...t, label: formatFrequencyHz(t.value) })) }; })()
       : logFrequencyScale(domainHz, [0, w]);
-  const frame = cartesianFrame({ width: size.width, areaHeight, xTitle: "Frequency (Hz)", yTitle: "", yTicks: () => laneTicks, xTicks: (w) => makeX(w).ticks, legendItems });
+  const hasMarkers = (input.markers ?? []).length > 0;
+  const frame = cartesianFrame({ width: size.width, areaHeight, xTitle: "Frequency (Hz)", yTitle: "", yTicks: () => laneTicks, xTicks: (w) => makeX(w).ticks, legendItems, topPx: hasMarkers ? 22 : 12 });
   const x = makeX(frame.area.width);
   const stems: ModeStem[] = [];
   for (const lane of lanes) {
@@ -96,7 +99,7 @@ export function modeSpectrumGeometry(input: ModeSpectrumInput, size: { width: nu
       const px = x.map(m.frequencyHz);
       const last = stems[stems.length - 1];
       if (last && last.kind === lane.kind && Math.abs(last.x - px) < 1.5) { last.modes.push(m); continue; }
-      const stem: ModeStem = { kind: lane.kind, x: px, yTop: lane.y0 + 12, yBottom: lane.y1, modes: [m] };
+      const stem: ModeStem = { kind: lane.kind, x: px, yTop: lane.y0 + 12, yBottom: lane.y1, modes: [m], countLabel: false };
       if (input.bandwidthHz !== undefined) {
         const x0 = Math.max(0, x.map(Math.max(domainHz[0], m.frequencyHz - input.bandwidthHz / 2)));
         const x1 = Math.min(frame.area.width, x.map(m.frequencyHz + input.bandwidthHz / 2));
@@ -105,11 +108,18 @@ export function modeSpectrumGeometry(input: ModeSpectrumInput, size: { width: nu
       stems.push(stem);
     }
   }
+  // "×n" labels sit right of the marker, about 16 px wide; keep them from touching.
+  let lastLabelEnd = -Infinity;
+  let lastKind: PlotModeKind | undefined;
+  for (const s of stems) {
+    if (s.kind !== lastKind) { lastLabelEnd = -Infinity; lastKind = s.kind; }
+    if (s.modes.length > 1 && s.x + 5 > lastLabelEnd + 2) { s.countLabel = true; lastLabelEnd = s.x + 5 + 16; }
+  }
   const order = stems.map((s, i) => ({ x: s.x, i })).sort((a, b) => a.x - b.x);
   const markerLines = placeMarkerLabels(
     (input.markers ?? []).filter((m) => m.value >= domainHz[0] && m.value <= domainHz[1]).map((m) => ({ x: x.map(m.value), label: m.label })),
     frame.area.width,
-  ).map((l) => ({ ...l, labelY: l.labelY - 4 }));
+  ).map((l) => ({ ...l, labelY: l.labelY - 20 }));
   const sorted = [...input.modes].sort((a, b) => a.frequencyHz - b.frequencyHz);
   const counts = MODE_KINDS.map((k) => `${input.modes.filter((m) => m.kind === k).length} ${k}`).join(", ");
   return {

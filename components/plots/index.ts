@@ -1,0 +1,13 @@
+export { FrequencyResponsePlot, type FrequencyResponsePlotProps } from "./frequency-response-plot";
+export { ModeSpectrumPlot, type ModeSpectrumPlotProps } from "./mode-spectrum-plot";
+export { BandBarsPlot, type BandBarsPlotProps } from "./band-bars-plot";
+export { AbsorptionPlot, type AbsorptionPlotProps } from "./absorption-plot";
+export { Heatmap, PlanMarker, type HeatmapProps, type PlanMarkerProps } from "./heatmap";
+export { Axis, Grid, type AxisProps, type GridProps } from "./axis";
+export { Legend, type LegendProps } from "./legend";
+export { Marker, type MarkerProps } from "./marker";
+export { PlotFrame, type PlotFrameProps } from "./plot-frame";
+export { HoverReadout, ReadoutBox, readoutText, type HoverReadoutProps, type Readout, type ReadoutRow } from "./hover-readout";
+export { PlotExportMenu, type PlotExportMenuProps } from "./plot-export-menu";
+export { DataTable } from "./data-table";
+export { FALLBACK_WIDTH_PX, useElementWidth } from "./use-element-width";
