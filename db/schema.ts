@@ -101,6 +101,85 @@ export interface DemoSeedTable {
   seeded_at: Timestamp;
 }
 
+// Room workspace (migration 2026-12-01T20-00-workspace). JSON columns hold values of the zod schemas
+// in lib/schemas/workspace.ts; they are written as JSON text and read back parsed.
+type Json<T> = ColumnType<T, string, string>;
+
+export interface RoomSurfacesTable {
+  room_id: string;
+  surface: "front" | "rear" | "left" | "right" | "floor" | "ceiling";
+  finish: Json<unknown>;
+  openings: ColumnType<unknown, string | undefined, string>;
+  assumed: Defaulted<boolean>;
+  updated_at: Timestamp;
+}
+
+export interface RoomPositionsTable {
+  id: Generated<string>;
+  room_id: string;
+  kind: "seat" | "main-speaker" | "subwoofer";
+  name: string;
+  x_m: number;
+  y_m: number;
+  z_m: number;
+  is_main: Defaulted<boolean>;
+  delay_ms: Defaulted<number>;
+  polarity: Defaulted<number>;
+  drives_bass: Defaulted<boolean>;
+  sort_order: Defaulted<number>;
+  created_at: Timestamp;
+  updated_at: Timestamp;
+}
+
+export interface ScenariosTable {
+  id: Generated<string>;
+  room_id: string;
+  name: string;
+  notes: Defaulted<string>;
+  is_baseline: Defaulted<boolean>;
+  archived_at: ColumnType<Date | null, Date | string | null | undefined, Date | string | null>;
+  target: ColumnType<unknown, string | undefined, string>;
+  version: Defaulted<number>;
+  results: ColumnType<unknown | null, string | null | undefined, string | null>;
+  engine_version: string | null;
+  inputs_hash: string | null;
+  computed_at: ColumnType<Date | null, Date | string | null | undefined, Date | string | null>;
+  sort_order: Defaulted<number>;
+  created_by: string | null;
+  created_at: Timestamp;
+  updated_at: Timestamp;
+}
+
+export interface TreatmentItemsTable {
+  id: Generated<string>;
+  scenario_id: string;
+  name: string;
+  kind: "porous-panel" | "corner-trap" | "membrane" | "perforated";
+  spec: Json<unknown>;
+  count: number;
+  placements: ColumnType<unknown, string | undefined, string>;
+  unit_cost: Defaulted<number>;
+  unit_mass_kg: number | null;
+  build_id: string | null;
+  notes: Defaulted<string>;
+  sort_order: Defaulted<number>;
+  created_at: Timestamp;
+  updated_at: Timestamp;
+}
+
+export interface BuildsTable {
+  id: Generated<string>;
+  firm_id: string;
+  name: string;
+  kind: "porous-panel" | "corner-trap" | "membrane" | "perforated";
+  spec: Json<unknown>;
+  notes: Defaulted<string>;
+  version: Defaulted<number>;
+  created_by: string | null;
+  created_at: Timestamp;
+  updated_at: Timestamp;
+}
+
 export interface Database {
   firms: FirmsTable;
   users: UsersTable;
@@ -112,6 +191,11 @@ export interface Database {
   rooms: RoomsTable;
   dev_outbox: DevOutboxTable;
   demo_seed: DemoSeedTable;
+  room_surfaces: RoomSurfacesTable;
+  room_positions: RoomPositionsTable;
+  scenarios: ScenariosTable;
+  treatment_items: TreatmentItemsTable;
+  builds: BuildsTable;
 }
 
 export type UserRow = Selectable<UsersTable>;

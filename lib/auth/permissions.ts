@@ -17,7 +17,8 @@ export type FirmAction =
   | "member.list"
   | "member.manage"
   | "outbox.read"
-  | "engine.run";
+  | "engine.run"
+  | LibraryAction;
 
 /** Actions on one project (and the rooms and analyses inside it). */
 export type ProjectAction =
@@ -29,7 +30,36 @@ export type ProjectAction =
   | "room.update"
   | "room.delete"
   | "build.read"
-  | "build.mark-done";
+  | "build.mark-done"
+  | WorkspaceAction;
+
+/**
+ * The firm's build library (saved absorber designs): owners and engineers manage it, builders read
+ * it, clients neither. Builds are firm-scoped: another firm's build is simply not found (404).
+ */
+export type LibraryAction = "library.read" | "library.manage";
+const LIBRARY_ACTIONS: Record<Role, readonly LibraryAction[]> = {
+  owner: ["library.read", "library.manage"],
+  engineer: ["library.read", "library.manage"],
+  builder: ["library.read"],
+  client: [],
+};
+
+/**
+ * A room's workspace: surfaces, positions, scenarios, treatment items and their stored analysis.
+ * Owners and engineers read and write; builders read (they build from it); clients do not read it
+ * through the API — the analysis is the firm's working material, and a client sees what an issued
+ * report shows. So a client of the project gets 403 on workspace routes (the room itself stays
+ * readable), and a client of another project 404.
+ */
+export type WorkspaceAction = "workspace.read" | "workspace.update" | "scenario.create" | "scenario.update" | "scenario.archive" | "treatment.update";
+const STAFF_WORKSPACE_ACTIONS = ["workspace.read", "workspace.update", "scenario.create", "scenario.update", "scenario.archive", "treatment.update"] as const;
+const WORKSPACE_ACTIONS: Record<Role, readonly WorkspaceAction[]> = {
+  owner: STAFF_WORKSPACE_ACTIONS,
+  engineer: STAFF_WORKSPACE_ACTIONS,
+  builder: ["workspace.read"],
+  client: [],
+};
 
 const FIRM_ACTIONS: Record<Role, readonly FirmAction[]> = {
   owner: ["project.list", "project.create", "member.list", "member.manage", "outbox.read", "engine.run"],
@@ -40,7 +70,7 @@ const FIRM_ACTIONS: Record<Role, readonly FirmAction[]> = {
 
 /** May the actor do this firm-wide action? */
 export function canInFirm(actor: Actor, action: FirmAction): boolean {
-  return FIRM_ACTIONS[actor.role].includes(action);
+  return FIRM_ACTIONS[actor.role].includes(action) || (LIBRARY_ACTIONS[actor.role] as readonly FirmAction[]).includes(action);
 }
 
 /** The facts about a project that permissions depend on. */
@@ -73,7 +103,7 @@ const PROJECT_ACTIONS: Record<Role, readonly ProjectAction[]> = {
 
 /** May the actor do this to the project? False whenever the project is not visible to them. */
 export function canOnProject(actor: Actor, action: ProjectAction, project: ProjectFacts): boolean {
-  return canSeeProject(actor, project) && PROJECT_ACTIONS[actor.role].includes(action);
+  return canSeeProject(actor, project) && (PROJECT_ACTIONS[actor.role].includes(action) || (WORKSPACE_ACTIONS[actor.role] as readonly ProjectAction[]).includes(action));
 }
 
 /** Roles an owner may give when inviting or changing a member. */
