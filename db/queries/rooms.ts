@@ -1,9 +1,11 @@
 import { type Kysely, sql, type Transaction } from "kysely";
 import type { Actor } from "@/lib/auth/actor";
 import { canOnProject, type ProjectAction } from "@/lib/auth/permissions";
-import { conflict, forbidden, notFound } from "@/lib/api/errors";
+import { AppError, conflict, forbidden, notFound } from "@/lib/api/errors";
+import { roomGeometryIssues } from "@/lib/analysis";
 import type { RoomInput, RoomUpdate } from "@/lib/schemas/room";
 import type { Database, RoomRow } from "../schema";
+import { analysisItemOf, loadAnalysisRoom, loadItems, recomputeRoomScenarios } from "./analysis";
 import { findProject, isUuid, projectFor, type Project } from "./projects";
 
 type Db = Kysely<Database> | Transaction<Database>;
@@ -74,6 +76,8 @@ export async function createRoom(db: Kysely<Database>, actor: Actor, projectId: 
       .returningAll()
       .executeTakeFirstOrThrow();
     await trx.updateTable("projects").set({ updated_at: sql`now()` }).where("id", "=", projectId).execute();
+    // The insert trigger gave the room its six surfaces and its baseline scenario: analyse it now.
+    await recomputeRoomScenarios(trx, row.id);
     return toRoom(row);
   });
 }
@@ -100,8 +104,43 @@ export async function updateRoom(db: Kysely<Database>, actor: Actor, roomId: str
       .returningAll()
       .executeTakeFirst();
     if (!row) throw conflict();
+    const resized = rest.lengthM !== undefined || rest.widthM !== undefined || rest.heightM !== undefined;
+    if (resized) await checkRoomGeometry(trx, roomId, rest);
+    if (resized || rest.temperatureC !== undefined || rest.humidityPct !== undefined) await recomputeRoomScenarios(trx, roomId);
     return toRoom(row);
   });
+}
+
+/**
+ * After a change of dimensions (inside the same transaction): every position, opening and item
+ * placement must still fit, else the change is refused with the offending things named (400).
+ */
+async function checkRoomGeometry(trx: Transaction<Database>, roomId: string, changed: Partial<Pick<RoomUpdate, "lengthM" | "widthM" | "heightM">>): Promise<void> {
+  const room = await loadAnalysisRoom(trx, roomId);
+  const scenarioIds = (await trx.selectFrom("scenarios").select("id").where("room_id", "=", roomId).execute()).map((s) => s.id);
+  const items = (await loadItems(trx, scenarioIds)).map(analysisItemOf);
+  const issues = roomGeometryIssues(room, items);
+  if (issues.length === 0) return;
+  const messages = issues.slice(0, 10).map((i) => i.message);
+  const fields: Record<string, string[]> = {};
+  for (const key of ["lengthM", "widthM", "heightM"] as const) if (changed[key] !== undefined) fields[key] = messages;
+  throw new AppError("bad_request", `The new size leaves ${issues.length} position(s), opening(s) or item(s) outside the room: move them first.`, fields);
+}
+
+/**
+ * Takes the room's row lock and bumps its version if `version` is current (else 409): the first
+ * step of every write to a room's surfaces or positions, which belong to the room's version.
+ */
+export async function bumpRoomVersion(trx: Transaction<Database>, roomId: string, version: number): Promise<Room> {
+  const row = await trx
+    .updateTable("rooms")
+    .set({ version: sql`version + 1`, updated_at: sql`now()` })
+    .where("id", "=", roomId)
+    .where("version", "=", version)
+    .returningAll()
+    .executeTakeFirst();
+  if (!row) throw conflict();
+  return toRoom(row);
 }
 
 export async function deleteRoom(db: Kysely<Database>, actor: Actor, roomId: string): Promise<void> {

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { WORKSPACE_ENDPOINTS } from "./openapi-workspace";
 import { flatnessMapRequestSchema, modalResponseRequestSchema, modesRequestSchema } from "@/lib/modes/schemas";
 import { absorberRatingRequestSchema, absorberSpectrumRequestSchema } from "@/lib/porous/schemas";
 import { reverbPredictRequestSchema, reverbTargetRequestSchema } from "@/lib/reverb/schemas";
@@ -6,7 +7,7 @@ import { inviteSchema, memberUpdateSchema } from "@/lib/schemas/member";
 import { projectInputSchema, projectUpdateSchema } from "@/lib/schemas/project";
 import { roomInputSchema, roomUpdateSchema } from "@/lib/schemas/room";
 
-type Method = "get" | "post" | "patch" | "delete";
+type Method = "get" | "post" | "put" | "patch" | "delete";
 
 /** One documented endpoint. Request bodies are the same zod schemas the handlers parse. */
 export interface EndpointDoc {
@@ -17,6 +18,10 @@ export interface EndpointDoc {
   body?: z.ZodType;
   success: number;
   public?: boolean;
+  /** Query parameters (strings), e.g. `version` of a DELETE */
+  query?: { name: string; description: string; required?: boolean }[];
+  /** Answers 409 on a stale version (PATCH and PUT always do) */
+  conflict?: boolean;
 }
 
 const ENDPOINTS: EndpointDoc[] = [
@@ -44,7 +49,7 @@ const ENDPOINTS: EndpointDoc[] = [
   { method: "get", path: "/openapi.json", summary: "This document", tag: "Meta", success: 200, public: true },
 ];
 
-const endpoints: EndpointDoc[] = [...ENDPOINTS];
+const endpoints: EndpointDoc[] = [...ENDPOINTS, ...WORKSPACE_ENDPOINTS];
 
 /** Computation modules add their endpoints here (see lib/api/openapi-engines.ts). */
 export function documentEndpoints(more: EndpointDoc[]): void {
@@ -91,13 +96,14 @@ export function openApiDocument(): Record<string, unknown> {
   const paths: Record<string, Record<string, unknown>> = {};
   const schemas: Record<string, unknown> = { Error: errorSchema };
   for (const e of endpoints) {
-    const params = [...e.path.matchAll(/\{(\w+)\}/g)].map((m) => ({ name: m[1], in: "path", required: true, schema: { type: "string" } }));
+    const params: Record<string, unknown>[] = [...e.path.matchAll(/\{(\w+)\}/g)].map((m) => ({ name: m[1], in: "path", required: true, schema: { type: "string" } }));
+    for (const q of e.query ?? []) params.push({ name: q.name, in: "query", required: q.required ?? false, description: q.description, schema: { type: "string" } });
     const errors = {
       "400": { description: "Invalid input; `fields` names each failing field", content: { "application/json": { schema: { $ref: "#/components/schemas/Error" } } } },
       ...(e.public ? {} : { "401": { description: "Not signed in", content: { "application/json": { schema: { $ref: "#/components/schemas/Error" } } } } }),
       "403": { description: "Signed in, but the role does not allow it" },
       "404": { description: "Not found, or not visible to the caller" },
-      ...(e.method === "patch" ? { "409": { description: "Stale version: someone else changed it" } } : {}),
+      ...(e.method === "patch" || e.method === "put" || e.conflict ? { "409": { description: "Stale version: someone else changed it" } } : {}),
     };
     (paths[e.path] ??= {})[e.method] = {
       summary: e.summary,
