@@ -1,8 +1,10 @@
 import { hash } from "@node-rs/argon2";
-import type { Kysely } from "kysely";
+import type { Kysely, Transaction } from "kysely";
 import { ARGON2_OPTIONS } from "../lib/auth/password-options";
 import { newUserId } from "../lib/auth/ids";
-import { DEMO_ACCOUNTS, DEMO_FIRM, DEMO_PROJECTS } from "./seed-data";
+import { placementIssues, positionInputSchema, scenarioInputSchema, buildInputSchema, surfacesInputSchema, treatmentItemInputSchema, positionInsideRoomIssues, openingIssues } from "../lib/schemas/workspace";
+import { recomputeRoomScenarios } from "./queries/analysis";
+import { DEMO_ACCOUNTS, DEMO_BUILDS, DEMO_FIRM, DEMO_PROJECTS, DEMO_WORKSPACES } from "./seed-data";
 import type { Database } from "./schema";
 
 /**
@@ -27,6 +29,7 @@ export async function seedDemo(db: Kysely<Database>): Promise<{ created: boolean
     }
     const engineerId = DEMO_ACCOUNTS.find((a) => a.role === "engineer")?.email;
     const builderEmail = DEMO_ACCOUNTS.find((a) => a.role === "builder")?.email;
+    const roomIds = new Map<string, { id: string; lengthM: number; widthM: number; heightM: number }>();
     for (const p of DEMO_PROJECTS) {
       const project = await trx
         .insertInto("projects")
@@ -46,12 +49,105 @@ export async function seedDemo(db: Kysely<Database>): Promise<{ created: boolean
         await trx.insertInto("project_builders").values({ project_id: project.id, user_id: ids.get(builderEmail)! }).execute();
       }
       for (const r of p.rooms) {
-        await trx
+        const room = await trx
           .insertInto("rooms")
           .values({ project_id: project.id, name: r.name, length_m: r.lengthM, width_m: r.widthM, height_m: r.heightM, temperature_c: r.temperatureC, humidity_pct: r.humidityPct, notes: r.notes })
+          .returning("id")
+          .executeTakeFirstOrThrow();
+        roomIds.set(r.name, { id: room.id, lengthM: r.lengthM, widthM: r.widthM, heightM: r.heightM });
+      }
+    }
+    const engineerUserId = engineerId ? ids.get(engineerId) ?? null : null;
+    await seedWorkspaces(trx, firm.id, engineerUserId, roomIds);
+    return { created: true };
+  });
+}
+
+/** Fails the seed loudly when demo data breaks a rule the app enforces (so the demo never shows invalid data). */
+function assertNoIssues(what: string, issues: { path: (string | number)[]; message: string }[]) {
+  if (issues.length > 0) throw new Error(`demo ${what}: ${issues.map((i) => `${i.path.join(".")} ${i.message}`).join("; ")}`);
+}
+
+/**
+ * The rooms' workspaces: surfaces, seats and sources, the treated scenarios with their items, the
+ * firm's build library, and the stored analysis of every scenario (lib/analysis, as the app computes
+ * it). The insert trigger already gave each room its six surfaces and its baseline scenario.
+ */
+async function seedWorkspaces(
+  trx: Transaction<Database>,
+  firmId: string,
+  engineerUserId: string | null,
+  rooms: Map<string, { id: string; lengthM: number; widthM: number; heightM: number }>,
+): Promise<void> {
+  const buildIds = new Map<string, string>();
+  for (const b of DEMO_BUILDS) {
+    const build = buildInputSchema.parse(b);
+    const row = await trx
+      .insertInto("builds")
+      .values({ firm_id: firmId, name: build.name, kind: build.spec.kind, spec: JSON.stringify(build.spec), notes: build.notes, created_by: engineerUserId })
+      .returning("id")
+      .executeTakeFirstOrThrow();
+    buildIds.set(build.name, row.id);
+  }
+  for (const w of DEMO_WORKSPACES) {
+    const room = rooms.get(w.room);
+    if (!room) throw new Error(`demo workspace for an unknown room: ${w.room}`);
+    const { surfaces } = surfacesInputSchema.parse({ version: 1, surfaces: w.surfaces });
+    for (const s of surfaces) {
+      assertNoIssues(`${w.room} ${s.surface} openings`, openingIssues(s.surface, s.openings, room));
+      await trx
+        .updateTable("room_surfaces")
+        .set({ finish: JSON.stringify(s.finish), openings: JSON.stringify(s.openings), assumed: false })
+        .where("room_id", "=", room.id)
+        .where("surface", "=", s.surface)
+        .execute();
+    }
+    for (const [i, raw] of w.positions.entries()) {
+      const p = positionInputSchema.parse({ ...raw, version: 1 });
+      assertNoIssues(`${w.room} ${p.name}`, positionInsideRoomIssues(p, room));
+      await trx
+        .insertInto("room_positions")
+        .values({
+          room_id: room.id,
+          kind: p.kind,
+          name: p.name,
+          x_m: p.xM,
+          y_m: p.yM,
+          z_m: p.zM,
+          is_main: p.kind === "seat" && p.isMain,
+          sort_order: i,
+          ...(p.kind !== "seat" && { delay_ms: p.delayMs, polarity: p.polarity, drives_bass: p.drivesBass }),
+        })
+        .execute();
+    }
+    for (const [i, raw] of w.scenarios.entries()) {
+      const sc = scenarioInputSchema.parse(raw);
+      const row = await trx
+        .insertInto("scenarios")
+        .values({ room_id: room.id, name: sc.name, notes: sc.notes, target: JSON.stringify(sc.target), sort_order: i + 1, created_by: engineerUserId })
+        .returning("id")
+        .executeTakeFirstOrThrow();
+      for (const [k, rawItem] of raw.items.entries()) {
+        const item = treatmentItemInputSchema.parse({ ...rawItem, version: 1 });
+        assertNoIssues(`${w.room} ${sc.name} ${item.name}`, placementIssues(item, room));
+        await trx
+          .insertInto("treatment_items")
+          .values({
+            scenario_id: row.id,
+            name: item.name,
+            kind: item.spec.kind,
+            spec: JSON.stringify(item.spec),
+            count: item.count,
+            placements: JSON.stringify(item.placements),
+            unit_cost: item.unitCost,
+            unit_mass_kg: item.unitMassKg,
+            build_id: typeof rawItem.buildName === "string" ? (buildIds.get(rawItem.buildName) ?? null) : null,
+            notes: item.notes,
+            sort_order: k,
+          })
           .execute();
       }
     }
-    return { created: true };
-  });
+  }
+  for (const room of rooms.values()) await recomputeRoomScenarios(trx, room.id);
 }
