@@ -29,55 +29,38 @@ for (let E = 1; E < 2047; E++) {
 export const LN_FLOOR = 1e-30;
 
 /**
- * Writes [mean, variance] of ln(max(p, LN_FLOOR)) over p[start .. start + count) into out[at], out[at + 1].
- * `bits` must be an Int32Array view of p's buffer (little-endian: the high word of p[i] is bits[2i + 1]).
- * Values must be finite and non-negative.
+ * ln p from p > 0 and the high 32 bits of its IEEE-754 form (see the file comment). Small enough for
+ * the engine to inline into the loops below.
  */
-export function lnMoments(p: Float64Array, bits: Int32Array, start: number, count: number, out: Float64Array, at: number): void {
-  const end = start + count;
-  for (let i = start; i < end; i++) if (!(p[i]! > LN_FLOOR)) p[i] = LN_FLOOR;
-  if (!LITTLE_ENDIAN) return lnMomentsPlain(p, start, count, out, at);
-  // Shift by the first value: the variance of (l - K) equals that of l and loses less to cancellation.
-  const K = Math.log(p[start]!);
-  let s = 0, s2 = 0;
-  for (let i = start; i < end; i++) {
-    const hi = bits[2 * i + 1]!;
-    const E = hi >> 20; // sign bit is 0 for p > 0
-    const k = (hi >> 12) & 0xff;
-    const r = p[i]! * EXPONENT[2 * E]! * TABLE[2 * k]! - 1;
-    // ln p = e ln2 + ln c_k + (r - r^2/2 + r^3/3 - r^4/4)  (A&S 4.1.24)
-    const d = EXPONENT[2 * E + 1]! + TABLE[2 * k + 1]! - K + r * (1 - r * (0.5 - r * (1 / 3 - r * 0.25)));
-    s += d;
-    s2 += d * d;
-  }
-  const mean = s / count;
-  out[at] = K + mean;
-  out[at + 1] = Math.max(0, s2 / count - mean * mean);
+function lnFromBits(p: number, hi: number): number {
+  const x = (hi >> 19) & 0xffe, k = (hi >> 11) & 0x1fe; // 2 * biased exponent, 2 * top 8 mantissa bits
+  const r = p * EXPONENT[x]! * TABLE[k]! - 1;
+  // ln p = e ln2 + ln c_k + (r - r^2/2 + r^3/3 - r^4/4)  (A&S 4.1.24)
+  return EXPONENT[x + 1]! + TABLE[k + 1]! + r * (1 - r * (0.5 - r * (1 / 3 - r * 0.25)));
 }
 
 /**
- * For complex spectra E (from E[eo]) and O (from O[oo]) (interleaved re, im; nf values each), the population variances over
- * frequency of ln|E + O|^2 and ln|E - O|^2 (the levels of a cell and of its mirror image), written to
- * out[0] and out[1]. Powers below LN_FLOOR count as LN_FLOOR. `pw` (2 doubles at least) and `bits` are
- * scratch sharing one buffer; the logarithm is the one of lnMoments, fused with the power here.
+ * For complex spectra E = A + sign * B (A from A[ao], B from B[bo]) and O (from O[oo]), interleaved
+ * re, im with nf values each, the population variances over frequency of ln|E + O|^2 and ln|E - O|^2
+ * (the levels of a cell and of its mirror image), written to out[0] and out[1]. Pass sign = 0 when E
+ * is A alone. Powers below LN_FLOOR count as LN_FLOOR. `pw` (2 doubles) and `bits` share one buffer.
  */
-export function mirroredLevelVariance(E: Float64Array, eo: number, O: Float64Array, oo: number, pw: Float64Array, bits: Int32Array, nf: number, out: Float64Array): void {
-  if (!LITTLE_ENDIAN) return mirroredPlain(E, eo, O, oo, nf, out);
+export function mirroredLevelVariance(
+  A: Float64Array, ao: number, B: Float64Array, bo: number, sign: number, O: Float64Array, oo: number,
+  pw: Float64Array, bits: Int32Array, nf: number, out: Float64Array,
+): void {
+  if (!LITTLE_ENDIAN) return mirroredPlain(A, ao, B, bo, sign, O, oo, nf, out);
   let K1 = 0, K2 = 0, s1 = 0, q1 = 0, s2 = 0, q2 = 0;
   for (let f = 0; f < nf; f++) {
-    const er = E[eo + 2 * f]!, ei = E[eo + 2 * f + 1]!, or = O[oo + 2 * f]!, oi = O[oo + 2 * f + 1]!;
+    const er = A[ao + 2 * f]! + sign * B[bo + 2 * f]!, ei = A[ao + 2 * f + 1]! + sign * B[bo + 2 * f + 1]!;
+    const or = O[oo + 2 * f]!, oi = O[oo + 2 * f + 1]!;
     const ar = er + or, ai = ei + oi, br = er - or, bi = ei - oi;
     let p1 = ar * ar + ai * ai, p2 = br * br + bi * bi;
     if (!(p1 > LN_FLOOR)) p1 = LN_FLOOR;
     if (!(p2 > LN_FLOOR)) p2 = LN_FLOOR;
     pw[0] = p1;
     pw[1] = p2;
-    const h1 = bits[1]!, h2 = bits[3]!;
-    const x1 = (h1 >> 19) & 0xffe, k1 = (h1 >> 11) & 0x1fe, x2 = (h2 >> 19) & 0xffe, k2 = (h2 >> 11) & 0x1fe;
-    const r1 = p1 * EXPONENT[x1]! * TABLE[k1]! - 1, r2 = p2 * EXPONENT[x2]! * TABLE[k2]! - 1;
-    // ln p = e ln2 + ln c_k + (r - r^2/2 + r^3/3 - r^4/4)  (A&S 4.1.24)
-    const l1 = EXPONENT[x1 + 1]! + TABLE[k1 + 1]! + r1 * (1 - r1 * (0.5 - r1 * (1 / 3 - r1 * 0.25)));
-    const l2 = EXPONENT[x2 + 1]! + TABLE[k2 + 1]! + r2 * (1 - r2 * (0.5 - r2 * (1 / 3 - r2 * 0.25)));
+    const l1 = lnFromBits(p1, bits[1]!), l2 = lnFromBits(p2, bits[3]!);
     // Shift by the first value: the variance of (l - K) is that of l and loses less to cancellation.
     if (f === 0) { K1 = l1; K2 = l2; }
     const d1 = l1 - K1, d2 = l2 - K2;
@@ -88,10 +71,11 @@ export function mirroredLevelVariance(E: Float64Array, eo: number, O: Float64Arr
   out[1] = Math.max(0, q2 / nf - m2 * m2);
 }
 
-function mirroredPlain(E: Float64Array, eo: number, O: Float64Array, oo: number, nf: number, out: Float64Array): void {
+function mirroredPlain(A: Float64Array, ao: number, B: Float64Array, bo: number, sign: number, O: Float64Array, oo: number, nf: number, out: Float64Array): void {
   const l1 = new Float64Array(nf), l2 = new Float64Array(nf);
   for (let f = 0; f < nf; f++) {
-    const er = E[eo + 2 * f]!, ei = E[eo + 2 * f + 1]!, or = O[oo + 2 * f]!, oi = O[oo + 2 * f + 1]!;
+    const er = A[ao + 2 * f]! + sign * B[bo + 2 * f]!, ei = A[ao + 2 * f + 1]! + sign * B[bo + 2 * f + 1]!;
+    const or = O[oo + 2 * f]!, oi = O[oo + 2 * f + 1]!;
     const ar = er + or, ai = ei + oi, br = er - or, bi = ei - oi;
     l1[f] = Math.max(ar * ar + ai * ai, LN_FLOOR);
     l2[f] = Math.max(br * br + bi * bi, LN_FLOOR);

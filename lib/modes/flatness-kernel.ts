@@ -10,7 +10,8 @@
  *    dense products (dense-rows.ts, four or eight outputs per pass) instead of a sum over all modes per receiver.
  * 3. Cell centres are mirror-symmetric about the room's centre and cos(n pi (L - x)/L) = (-1)^n cos(n pi x/L):
  *    splitting each sum into even and odd indices gives a cell and its mirror image from one pass
- *    (E + O and E - O), in x and in y.
+ *    (E + O and E - O), in x and in y; for an even gridY the half-rows are symmetric again about the
+ *    quarter point, which halves the work on the even-ny terms (step3RowQuarter).
  * 4. The level statistics use a table-driven logarithm fused with |H|^2 (fast-log.ts).
  * Typed arrays throughout, scratch allocated once per call, no allocation in the loops.
  */
@@ -55,28 +56,63 @@ function pairLists(spec: PairSpectra, NY: number, W: number, odd: 0 | 1) {
 
 /** Tables and scratch of step 3, shared by the rows of one call. */
 interface Step3 {
-  gEvenRows: Int32Array; gOddRows: Int32Array; cyE: Float64Array; cyO: Float64Array;
-  nyEven: number; nyOdd: number; hy: number; gridY: number; nf: number; W: number;
+  nf: number; W: number; hy: number; gridY: number;
+  /** Plain path: rows of G and y-cosines for even and odd ny. */
+  gEvenRows: Int32Array; gOddRows: Int32Array; cyE: Float64Array; cyO: Float64Array; nyEven: number; nyOdd: number;
   dotE: DotKernel; dotO: DotKernel;
-  accE: Float64Array; accO: Float64Array; pw: Float64Array; pwBits: Int32Array; variances: Float64Array; out: Float64Array;
+  /** Quarter path (gridY even): ny = 0 mod 4 and ny = 2 mod 4 apart, and odd-ny cosines of the partner cells. */
+  quarter: boolean; g0Rows: Int32Array; g2Rows: Int32Array; cy0: Float64Array; cy2: Float64Array; cyOPartner: Float64Array;
+  n0: number; n2: number; dot0: DotKernel; dot2: DotKernel;
+  accE: Float64Array; accE2: Float64Array; accO: Float64Array; accO2: Float64Array;
+  pw: Float64Array; pwBits: Int32Array; variances: Float64Array; out: Float64Array;
 }
 
+const toDb = 10 / Math.LN10; // 20 log10|H| = (10/ln 10) ln |H|^2
+
 /**
- * Step 3 for one x row whose G matrix starts at G[g0]: for eight y cells at a time, E and O (the sums
- * over even and odd ny), then the level variance over frequency of E + O (cell j) and E - O (its
- * mirror gridY - 1 - j).
+ * Step 3 for one x row whose G matrix starts at G[g0], eight y cells per pass: E and O are the sums
+ * over even and odd ny; cell j gets E + O and its mirror gridY - 1 - j gets E - O.
  */
 function step3Row(c: Step3, G: Float64Array, g0: number, ix: number): void {
   const { gEvenRows, gOddRows, cyE, cyO, nyEven, nyOdd, hy, gridY, nf, W, dotE, dotO, accE, accO, pw, pwBits, variances, out } = c;
-  const toDb = 10 / Math.LN10; // 20 log10|H| = (10/ln 10) ln |H|^2
   for (let j0 = 0; j0 < hy; j0 += 8) {
     dotE(accE, 0, W, G, gEvenRows, 0, g0, cyE, j0 * nyEven, nyEven, W);
     dotO(accO, 0, W, G, gOddRows, 0, g0, cyO, j0 * nyOdd, nyOdd, W);
     for (let q = 0; q < 8 && j0 + q < hy; q++) {
       const j = j0 + q, j2 = gridY - 1 - j;
-      mirroredLevelVariance(accE, q * W, accO, q * W, pw, pwBits, nf, variances);
+      mirroredLevelVariance(accE, q * W, accE, q * W, 0, accO, q * W, pw, pwBits, nf, variances);
       out[ix * gridY + j] = toDb * Math.sqrt(variances[0]!);
       if (j2 !== j) out[ix * gridY + j2] = toDb * Math.sqrt(variances[1]!);
+    }
+  }
+}
+
+/**
+ * Step 3 when gridY is even: besides y -> Ly - y, the cell centres of one half are symmetric about the
+ * quarter point, theta_j'' = pi/2 - theta_j with theta = pi (j + 1/2)/gridY and j'' = gridY/2 - 1 - j,
+ * and cos(2m (pi/2 - theta)) = (-1)^m cos(2m theta). So the even-ny sum of cell j'' is E0 - E2 when
+ * cell j has E0 + E2 (E0: ny = 0 mod 4, E2: ny = 2 mod 4), and one pass over the even rows serves four
+ * cells: j, j'' and their mirrors. The odd-ny sums are formed for j and j'' separately.
+ */
+function step3RowQuarter(c: Step3, G: Float64Array, g0: number, ix: number): void {
+  const { g0Rows, g2Rows, gOddRows, cy0, cy2, cyO, cyOPartner, n0, n2, nyOdd, hy, gridY, nf, W, dot0, dot2, dotO } = c;
+  const { accE, accE2, accO, accO2, pw, pwBits, variances, out } = c;
+  const hq = (hy + 1) >> 1;
+  for (let j0 = 0; j0 < hq; j0 += 8) {
+    dot0(accE, 0, W, G, g0Rows, 0, g0, cy0, j0 * n0, n0, W);
+    dot2(accE2, 0, W, G, g2Rows, 0, g0, cy2, j0 * n2, n2, W);
+    dotO(accO, 0, W, G, gOddRows, 0, g0, cyO, j0 * nyOdd, nyOdd, W);
+    dotO(accO2, 0, W, G, gOddRows, 0, g0, cyOPartner, j0 * nyOdd, nyOdd, W);
+    for (let q = 0; q < 8 && j0 + q < hq; q++) {
+      const j = j0 + q, jp = hy - 1 - j;
+      mirroredLevelVariance(accE, q * W, accE2, q * W, 1, accO, q * W, pw, pwBits, nf, variances);
+      out[ix * gridY + j] = toDb * Math.sqrt(variances[0]!);
+      out[ix * gridY + gridY - 1 - j] = toDb * Math.sqrt(variances[1]!);
+      if (jp !== j) {
+        mirroredLevelVariance(accE, q * W, accE2, q * W, -1, accO2, q * W, pw, pwBits, nf, variances);
+        out[ix * gridY + jp] = toDb * Math.sqrt(variances[0]!);
+        out[ix * gridY + gridY - 1 - jp] = toDb * Math.sqrt(variances[1]!);
+      }
     }
   }
 }
@@ -113,13 +149,28 @@ export function flatnessFromSpectra(spec: PairSpectra, gridX: number, gridY: num
   const stepO = Array.from({ length: NY }, (_, y) => dotKernel(odd.start[y + 1]! - odd.start[y]!, 4));
   const G = new Float64Array(8 * NY * W);
   const rowE = new Float64Array(4 * W), rowO = new Float64Array(4 * W);
+  // Quarter path tables (used when gridY is even).
+  const quarter = gridY % 2 === 0 && hy >= 2;
+  const n0 = Math.ceil(NY / 4), n2 = Math.floor((NY + 1) / 4);
+  const g0Rows = new Int32Array(Math.max(1, n0)), g2Rows = new Int32Array(Math.max(1, n2));
+  for (let k = 0; k < n0; k++) g0Rows[k] = 4 * k * W;
+  for (let k = 0; k < n2; k++) g2Rows[k] = (4 * k + 2) * W;
+  const cy0 = new Float64Array(hy8 * Math.max(1, n0)), cy2 = new Float64Array(hy8 * Math.max(1, n2));
+  const cyOPartner = new Float64Array(hy8 * Math.max(1, nyOdd));
+  for (let j = 0; j < hy; j++) {
+    for (let k = 0; k < n0; k++) cy0[j * n0 + k] = Cy[4 * k * hy + j]!;
+    for (let k = 0; k < n2; k++) cy2[j * n2 + k] = Cy[(4 * k + 2) * hy + j]!;
+    for (let k = 0; k < nyOdd; k++) cyOPartner[j * nyOdd + k] = Cy[(2 * k + 1) * hy + (hy - 1 - j)]!;
+  }
+  const pw = new Float64Array(2);
   const ctx: Step3 = {
-    gEvenRows, gOddRows, cyE, cyO, nyEven, nyOdd, hy, gridY, nf, W,
-    dotE: dotKernel(nyEven, 8), dotO: dotKernel(nyOdd, 8),
-    accE: new Float64Array(8 * W), accO: new Float64Array(8 * W),
-    pw: new Float64Array(2), pwBits: new Int32Array(0), variances: new Float64Array(2), out: new Float64Array(gridX * gridY),
+    nf, W, hy, gridY,
+    gEvenRows, gOddRows, cyE, cyO, nyEven, nyOdd, dotE: dotKernel(nyEven, 8), dotO: dotKernel(nyOdd, 8),
+    quarter, g0Rows, g2Rows, cy0, cy2, cyOPartner, n0, n2, dot0: dotKernel(n0, 8), dot2: dotKernel(n2, 8),
+    accE: new Float64Array(8 * W), accE2: new Float64Array(8 * W), accO: new Float64Array(8 * W), accO2: new Float64Array(8 * W),
+    pw, pwBits: new Int32Array(pw.buffer), variances: new Float64Array(2), out: new Float64Array(gridX * gridY),
   };
-  ctx.pwBits = new Int32Array(ctx.pw.buffer);
+  const rowStep = quarter ? step3RowQuarter : step3Row;
 
   const groups = Math.ceil(hx / 4);
   for (let gI = 0; gI < groups; gI++) {
@@ -150,8 +201,8 @@ export function flatnessFromSpectra(spec: PairSpectra, gridX: number, gridY: num
     }
     for (let q = 0; q < 4 && i0 + q < hx; q++) {
       const i = i0 + q, i2 = gridX - 1 - i;
-      step3Row(ctx, G, 2 * q * NY * W, i);
-      if (i2 !== i) step3Row(ctx, G, (2 * q + 1) * NY * W, i2);
+      rowStep(ctx, G, 2 * q * NY * W, i);
+      if (i2 !== i) rowStep(ctx, G, (2 * q + 1) * NY * W, i2);
     }
     progress.onProgress?.((gI + 1) / groups);
   }
