@@ -7,6 +7,14 @@ const envSchema = z.object({
   MAIL_FROM: z.string().default("Eigenroom <no-reply@eigenroom.invalid>"),
   /** "true"/"false"; by default cookies are Secure whenever APP_URL is https. */
   COOKIE_SECURE: z.enum(["true", "false"]).optional(),
+  /**
+   * PKCS#12 file (.p12/.pfx: certificate + private key) that signs issued reports. `npm start` and
+   * `npm test` point it at a self-signed development certificate under .data/certs/ (created on first
+   * run); in production set it to the firm's own certificate. Without it, reports cannot be issued.
+   */
+  SIGNING_P12_PATH: z.string().min(1).optional(),
+  /** Password of SIGNING_P12_PATH (empty when the file has none). */
+  SIGNING_P12_PASSWORD: z.string().optional(),
 });
 
 export type ServerEnv = z.infer<typeof envSchema> & { cookieSecure: boolean };

@@ -6,6 +6,7 @@ import { createDb } from "../db/create-db";
 import { migrateToLatest } from "../db/migrate";
 import { seedDemo } from "../db/seed";
 import { DEMO_ACCOUNTS } from "../db/seed-data";
+import { ensureDevCertificate } from "./services/dev-certificate";
 import { startFakeSmtp, type FakeSmtpHandle } from "./services/fake-smtp";
 import { buildFingerprint, buildIsCurrent, forgetBuild, recordBuild } from "./services/next-build";
 import { createDatabaseIfMissing, ensurePostgres, portIsFree, type PostgresHandle } from "./services/postgres";
@@ -111,6 +112,9 @@ async function main(): Promise<void> {
     smtpUrl = `smtp://127.0.0.1:${smtpPort}`;
     say(`fake SMTP server on ${smtpUrl} (messages land in the development outbox)`);
   }
+  // Issued reports are signed; without SIGNING_P12_PATH a self-signed development certificate is used.
+  const signing = process.env.SIGNING_P12_PATH ? undefined : ensureDevCertificate(root);
+  if (signing) say(`${signing.created ? "created the" : "using the"} development signing certificate ${path.relative(root, signing.p12Path)} (SHA-256 ${signing.fingerprintSha256.slice(0, 23)}…)`);
 
   const env: NodeJS.ProcessEnv = {
     ...process.env,
@@ -119,6 +123,7 @@ async function main(): Promise<void> {
     DATABASE_URL: databaseUrl,
     SMTP_URL: smtpUrl,
     APP_URL: appUrl,
+    ...(signing && { SIGNING_P12_PATH: signing.p12Path, SIGNING_P12_PASSWORD: signing.password }),
   };
   if (shuttingDown) return;
 

@@ -12,6 +12,7 @@ import path from "node:path";
 import { createDb } from "../db/create-db";
 import { migrateToLatest } from "../db/migrate";
 import { seedDemo } from "../db/seed";
+import { ensureDevCertificate } from "./services/dev-certificate";
 import { startFakeSmtp, type FakeSmtpHandle } from "./services/fake-smtp";
 import { buildFingerprint, buildIsCurrent, forgetBuild, recordBuild } from "./services/next-build";
 import { ensurePostgres, freePort, portIsFree, recreateDatabase, type PostgresHandle } from "./services/postgres";
@@ -230,6 +231,8 @@ async function main(): Promise<number> {
     return { outcome: "passed", note: smtpUrl };
   });
   if (!smtpOk) return 1;
+  // Issued reports are signed; without SIGNING_P12_PATH the development certificate (.data/certs) is used.
+  const signing = process.env.SIGNING_P12_PATH ? undefined : ensureDevCertificate(root);
 
   const appPort = await pickPort(Number(process.env.EIGENROOM_TEST_APP_PORT ?? 3100), "test app");
   const appUrl = `http://127.0.0.1:${appPort}`;
@@ -241,6 +244,7 @@ async function main(): Promise<number> {
     APP_URL: appUrl,
     MAIL_FROM: "Eigenroom <no-reply@eigenroom.invalid>",
     NEXT_DIST_DIR: DIST_DIR,
+    ...(signing && { SIGNING_P12_PATH: signing.p12Path, SIGNING_P12_PASSWORD: signing.password }),
   };
   const passWithNoTests = filtered ? ["--passWithNoTests"] : [];
 
