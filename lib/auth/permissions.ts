@@ -18,6 +18,7 @@ export type FirmAction =
   | "member.manage"
   | "outbox.read"
   | "engine.run"
+  | "report.settings"
   | LibraryAction;
 
 /** Actions on one project (and the rooms and analyses inside it). */
@@ -31,6 +32,16 @@ export type ProjectAction =
   | "room.delete"
   | "build.read"
   | "build.mark-done"
+  // Reports. Drafts (unsigned) are staff-only: `report.read` covers every revision, `report.read-issued`
+  // only issued and superseded ones. Builders get build sheets, not the client's report.
+  | "report.read"
+  | "report.compose"
+  | "report.issue"
+  | "report.send"
+  | "report.answer"
+  | "report.read-issued"
+  | "report.approve"
+  | "report.ask"
   | WorkspaceAction;
 
 /**
@@ -62,7 +73,7 @@ const WORKSPACE_ACTIONS: Record<Role, readonly WorkspaceAction[]> = {
 };
 
 const FIRM_ACTIONS: Record<Role, readonly FirmAction[]> = {
-  owner: ["project.list", "project.create", "member.list", "member.manage", "outbox.read", "engine.run"],
+  owner: ["project.list", "project.create", "member.list", "member.manage", "outbox.read", "engine.run", "report.settings"],
   engineer: ["project.list", "project.create", "member.list", "engine.run"],
   builder: ["project.list", "engine.run"],
   client: ["project.list", "engine.run"],
@@ -94,11 +105,13 @@ export function canSeeProject(actor: Actor, project: ProjectFacts): boolean {
   }
 }
 
+const STAFF_REPORT_ACTIONS = ["report.read", "report.compose", "report.issue", "report.send", "report.answer", "report.read-issued"] as const;
+
 const PROJECT_ACTIONS: Record<Role, readonly ProjectAction[]> = {
-  owner: ["project.read", "project.update", "project.delete", "room.read", "room.create", "room.update", "room.delete", "build.read", "build.mark-done"],
-  engineer: ["project.read", "project.update", "project.delete", "room.read", "room.create", "room.update", "room.delete", "build.read"],
+  owner: ["project.read", "project.update", "project.delete", "room.read", "room.create", "room.update", "room.delete", "build.read", "build.mark-done", ...STAFF_REPORT_ACTIONS],
+  engineer: ["project.read", "project.update", "project.delete", "room.read", "room.create", "room.update", "room.delete", "build.read", ...STAFF_REPORT_ACTIONS],
   builder: ["project.read", "room.read", "build.read", "build.mark-done"],
-  client: ["project.read", "room.read"],
+  client: ["project.read", "room.read", "report.read-issued", "report.approve", "report.ask"],
 };
 
 /** May the actor do this to the project? False whenever the project is not visible to them. */
