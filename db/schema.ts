@@ -180,6 +180,87 @@ export interface BuildsTable {
   updated_at: Timestamp;
 }
 
+export type PaperSize = "A4" | "LETTER";
+export type ReportRevisionStatus = "draft" | "issued" | "superseded";
+export type ReportEventKind = "drafted" | "issued" | "superseded" | "sent" | "viewed" | "downloaded" | "approved" | "question" | "answer";
+
+export interface FirmReportSettingsTable {
+  firm_id: string;
+  attach_pdf: Defaulted<boolean>;
+  signing_certificate_ref: Defaulted<string>;
+  certificate_fingerprint: string | null;
+  updated_at: Timestamp;
+}
+
+export interface ReportNumberCountersTable {
+  year: number;
+  last_number: number;
+}
+
+export interface ReportsTable {
+  id: Generated<string>;
+  firm_id: string;
+  project_id: string;
+  room_id: string;
+  number: string;
+  created_by: string | null;
+  created_at: Timestamp;
+}
+
+export interface ReportRevisionsTable {
+  id: Generated<string>;
+  report_id: string;
+  revision: number;
+  status: Defaulted<ReportRevisionStatus>;
+  scenario_ids: Defaulted<string[]>;
+  paper_size: Defaulted<PaperSize>;
+  note: Defaulted<string>;
+  pdf: Buffer | null;
+  sha256: string | null;
+  page_count: number | null;
+  signed_by: string | null;
+  signer_name: string | null;
+  signed_at: Date | null;
+  certificate_fingerprint: string | null;
+  engine_version: string | null;
+  superseded_at: Date | null;
+  created_by: string | null;
+  created_at: Timestamp;
+  updated_at: Timestamp;
+}
+
+export interface ReportEventsTable {
+  id: Generated<number>;
+  report_id: string;
+  revision_id: string | null;
+  kind: ReportEventKind;
+  actor_user_id: string | null;
+  actor_name: string;
+  detail: ColumnType<Record<string, unknown>, string | undefined, string>;
+  at: Timestamp;
+}
+
+export interface ReportCommentsTable {
+  id: Generated<string>;
+  report_id: string;
+  revision_id: string | null;
+  kind: "question" | "answer";
+  author_user_id: string | null;
+  author_name: string;
+  body: string;
+  created_at: Timestamp;
+}
+
+export interface ReportApprovalsTable {
+  id: Generated<string>;
+  report_id: string;
+  revision_id: string;
+  user_id: string | null;
+  user_name: string;
+  note: Defaulted<string>;
+  approved_at: Timestamp;
+}
+
 export interface Database {
   firms: FirmsTable;
   users: UsersTable;
@@ -196,6 +277,13 @@ export interface Database {
   scenarios: ScenariosTable;
   treatment_items: TreatmentItemsTable;
   builds: BuildsTable;
+  firm_report_settings: FirmReportSettingsTable;
+  report_number_counters: ReportNumberCountersTable;
+  reports: ReportsTable;
+  report_revisions: ReportRevisionsTable;
+  report_events: ReportEventsTable;
+  report_comments: ReportCommentsTable;
+  report_approvals: ReportApprovalsTable;
 }
 
 export type UserRow = Selectable<UsersTable>;
