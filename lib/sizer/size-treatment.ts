@@ -180,6 +180,12 @@ export function sizeTreatment(input: SizerInput): SizerResult {
     "absorption areas: porous builds from lib/porous at random incidence (diffraction edge effect not included); membrane and perforated traps are lumped estimates with an assumed resistance",
     "unit costs are the materials at the given prices, pro rata; the build sheet buys whole boards and slabs",
     ...(maxAddM2.some((m) => !Number.isFinite(m)) ? ["a sized band is already below the target's lower edge: no over-damping cap applied there"] : []),
+    ...(() => {
+      const low = bands.filter((x) => !x.sized && x.afterS < x.lowerS && x.beforeS >= x.lowerS).map((x) => `${x.nominalHz} Hz`);
+      return low.length > 0
+        ? [`the proposal takes ${low.join(", ")} below the target's lower edge: porous traps absorb the mid and high bands too; a facing that reflects those bands (e.g. a thin film or spaced slats over some panels) keeps the bass effect (common practice)`]
+        : [];
+    })(),
     ...(found.chosen.length > 0 ? [`proposal: ${items.map((it) => `${describeCount(it.count)} of "${it.name}"`).join("; ")}`] : []),
   ];
   return {
