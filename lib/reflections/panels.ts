@@ -31,7 +31,7 @@ export function suggestPanels(room: Room, zones: readonly Zone[], panel: { width
   checkRoom(room);
   checkNumber(panel.widthM, "panel.widthM", 0.1, 5);
   checkNumber(panel.heightM, "panel.heightM", 0.1, 5);
-  if (!Array.isArray(zones)) throw new TypeError("zones must be an array");
+  if (!Array.isArray(zones as unknown)) throw new TypeError("zones must be an array");
   return zones.map((zone, zi) => {
     const size = surfaceSize(room, zone.surface);
     const zu = zone.uMaxM - zone.uMinM;

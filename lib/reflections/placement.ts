@@ -48,8 +48,8 @@ export function checkPlacement(
   { items, openings, clearanceM = 0 }: { items: readonly PlacedItem[]; openings: readonly PlacedItem[]; clearanceM?: number },
 ): PlacementProblem[] {
   checkRoom(room);
-  if (!Array.isArray(items)) throw new TypeError("items must be an array");
-  if (!Array.isArray(openings)) throw new TypeError("openings must be an array");
+  if (!Array.isArray(items as unknown)) throw new TypeError("items must be an array");
+  if (!Array.isArray(openings as unknown)) throw new TypeError("openings must be an array");
   if (items.length > 500) throw new RangeError(`items must hold at most 500 rectangles, got ${items.length}`);
   items.forEach((it, i) => checkItem(it, `items[${i}]`));
   openings.forEach((it, i) => checkItem(it, `openings[${i}]`));
