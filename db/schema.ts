@@ -261,6 +261,74 @@ export interface ReportApprovalsTable {
   approved_at: Timestamp;
 }
 
+export type RoomFileKind = "photo" | "drawing" | "client-file";
+export type StoredContentType = "image/jpeg" | "image/png" | "image/webp" | "application/pdf";
+export type FeeBasis = "per-report" | "per-project";
+export type InvoiceStatus = "open" | "paid" | "void";
+
+export interface RoomFilesTable {
+  id: Generated<string>;
+  room_id: string;
+  uploaded_by: string | null;
+  uploader_name: string;
+  kind: RoomFileKind;
+  original_name: string;
+  content_type: StoredContentType;
+  size_bytes: number;
+  sha256: string;
+  storage_key: string;
+  thumbnail_key: string | null;
+  width_px: number | null;
+  height_px: number | null;
+  include_in_report: Defaulted<boolean>;
+  caption: Defaulted<string>;
+  created_at: Timestamp;
+}
+
+export interface StorageDeletionsTable {
+  storage_key: string;
+  queued_at: Timestamp;
+  attempts: Defaulted<number>;
+}
+
+export interface FeesTable {
+  firm_id: string;
+  basis: FeeBasis;
+  amount_minor: number;
+  currency: string;
+  downloads_wait_for_payment: Defaulted<boolean>;
+  updated_by: string | null;
+  updated_at: Timestamp;
+}
+
+export interface InvoicesTable {
+  id: Generated<string>;
+  firm_id: string;
+  project_id: string;
+  report_id: string | null;
+  description: string;
+  amount_minor: number;
+  currency: string;
+  status: Defaulted<InvoiceStatus>;
+  checkout_session_id: string | null;
+  checkout_url: string | null;
+  paid_at: Date | null;
+  voided_at: Date | null;
+  created_by: string | null;
+  created_at: Timestamp;
+  updated_at: Timestamp;
+}
+
+export interface PaymentEventsTable {
+  id: Generated<number>;
+  provider_event_id: string;
+  type: string;
+  invoice_id: string | null;
+  outcome: string;
+  payload: ColumnType<unknown, string, string>;
+  received_at: Timestamp;
+}
+
 export interface Database {
   firms: FirmsTable;
   users: UsersTable;
@@ -284,6 +352,11 @@ export interface Database {
   report_events: ReportEventsTable;
   report_comments: ReportCommentsTable;
   report_approvals: ReportApprovalsTable;
+  room_files: RoomFilesTable;
+  storage_deletions: StorageDeletionsTable;
+  fees: FeesTable;
+  invoices: InvoicesTable;
+  payment_events: PaymentEventsTable;
 }
 
 export type UserRow = Selectable<UsersTable>;

@@ -19,6 +19,7 @@ export type FirmAction =
   | "outbox.read"
   | "engine.run"
   | "report.settings"
+  | "fee.manage"
   | LibraryAction;
 
 /** Actions on one project (and the rooms and analyses inside it). */
@@ -42,7 +43,16 @@ export type ProjectAction =
   | "report.read-issued"
   | "report.approve"
   | "report.ask"
+  // Room files (photos, drawings, the client's own files) and the engineering fee's invoices.
+  | FileAndInvoiceAction
   | WorkspaceAction;
+
+/**
+ * `file.delete` removes any file of the project, `file.delete-own` only one the actor uploaded;
+ * `file.curate` chooses the report's photos; `invoice.raise` raises and voids; only the project's
+ * client pays (`invoice.pay`). Builders see invoices not at all (the fee is between firm and client).
+ */
+export type FileAndInvoiceAction = "file.read" | "file.upload" | "file.delete" | "file.delete-own" | "file.curate" | "invoice.read" | "invoice.raise" | "invoice.pay";
 
 /**
  * The firm's build library (saved absorber designs): owners and engineers manage it, builders read
@@ -73,7 +83,7 @@ const WORKSPACE_ACTIONS: Record<Role, readonly WorkspaceAction[]> = {
 };
 
 const FIRM_ACTIONS: Record<Role, readonly FirmAction[]> = {
-  owner: ["project.list", "project.create", "member.list", "member.manage", "outbox.read", "engine.run", "report.settings"],
+  owner: ["project.list", "project.create", "member.list", "member.manage", "outbox.read", "engine.run", "report.settings", "fee.manage"],
   engineer: ["project.list", "project.create", "member.list", "engine.run"],
   builder: ["project.list", "engine.run"],
   client: ["project.list", "engine.run"],
@@ -107,6 +117,25 @@ export function canSeeProject(actor: Actor, project: ProjectFacts): boolean {
 
 const STAFF_REPORT_ACTIONS = ["report.read", "report.compose", "report.issue", "report.send", "report.answer", "report.read-issued"] as const;
 
+const STAFF_FILE_INVOICE_ACTIONS = ["file.read", "file.upload", "file.delete", "file.curate", "invoice.read", "invoice.raise"] as const;
+const FILE_INVOICE_ACTIONS: Record<Role, readonly FileAndInvoiceAction[]> = {
+  owner: STAFF_FILE_INVOICE_ACTIONS,
+  engineer: STAFF_FILE_INVOICE_ACTIONS,
+  builder: ["file.read", "file.upload", "file.delete-own"],
+  client: ["file.read", "file.upload", "file.delete-own", "invoice.read", "invoice.pay"],
+};
+
+/**
+ * Which kinds of room file a role may upload: builders add site photos (drawings are the engineer's
+ * design documents), clients add their own files (plans, pictures, papers), staff add anything.
+ */
+export const UPLOAD_KINDS: Record<Role, readonly ("photo" | "drawing" | "client-file")[]> = {
+  owner: ["photo", "drawing", "client-file"],
+  engineer: ["photo", "drawing", "client-file"],
+  builder: ["photo"],
+  client: ["client-file"],
+};
+
 const PROJECT_ACTIONS: Record<Role, readonly ProjectAction[]> = {
   owner: ["project.read", "project.update", "project.delete", "room.read", "room.create", "room.update", "room.delete", "build.read", "build.mark-done", ...STAFF_REPORT_ACTIONS],
   engineer: ["project.read", "project.update", "project.delete", "room.read", "room.create", "room.update", "room.delete", "build.read", ...STAFF_REPORT_ACTIONS],
@@ -116,7 +145,7 @@ const PROJECT_ACTIONS: Record<Role, readonly ProjectAction[]> = {
 
 /** May the actor do this to the project? False whenever the project is not visible to them. */
 export function canOnProject(actor: Actor, action: ProjectAction, project: ProjectFacts): boolean {
-  return canSeeProject(actor, project) && (PROJECT_ACTIONS[actor.role].includes(action) || (WORKSPACE_ACTIONS[actor.role] as readonly ProjectAction[]).includes(action));
+  return canSeeProject(actor, project) && (PROJECT_ACTIONS[actor.role].includes(action) || (FILE_INVOICE_ACTIONS[actor.role] as readonly ProjectAction[]).includes(action) || (WORKSPACE_ACTIONS[actor.role] as readonly ProjectAction[]).includes(action));
 }
 
 /** Roles an owner may give when inviting or changing a member. */
