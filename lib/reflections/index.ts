@@ -11,4 +11,4 @@ export { reflectionPoint, type ReflectionPoint } from "./reflection-point";
 export { firstReflections, listeningAreaSeats, reflectionZones, type Position, type SeatReflection, type Zone } from "./zones";
 export { suggestPanels, type SuggestedPanelSet } from "./panels";
 export { checkPlacement, cornerTrapFootprints, type PlacedItem, type PlacementProblem, type VerticalCorner } from "./placement";
-export { placedItemSchema, point3Schema, positionSchema, reflectionRoomSchema, reflectionsRequestSchema, surfaceIdSchema, type ReflectionsRequest } from "./schemas";
+export { placedItemSchema, point3Schema, positionSchema, reflectionRoomSchema, reflectionsRequestSchema, roomReflectionsRequestSchema, surfaceIdSchema, type ReflectionsRequest, type RoomReflectionsRequest } from "./schemas";

@@ -28,3 +28,20 @@ export const reflectionsRequestSchema = z
   .refine((v) => v.seats.length > 0 || v.listeningArea !== undefined, { message: "give seats or a listening area", path: ["seats"] })
   .meta({ id: "ReflectionsRequest", description: "First reflection points, zones over a listening area, a suggested panel set and its placement checks" });
 export type ReflectionsRequest = z.infer<typeof reflectionsRequestSchema>;
+
+/** Body of `POST /api/v1/reflections`: reflection points, zones, panels and checks for a stored room. */
+export const roomReflectionsRequestSchema = z
+  .object({
+    roomId: z.uuid().describe("The room: its main speakers, seats and openings are used"),
+    listeningArea: z
+      .object({ xMinM: z.number().min(0).max(100), xMaxM: z.number().min(0).max(100), yMinM: z.number().min(0).max(100), yMaxM: z.number().min(0).max(100), earHeightM: z.number().min(0).max(100) })
+      .optional()
+      .describe("A listening area used instead of the room's seats (its four corners at ear height)"),
+    marginM: z.number().min(0).max(2).default(0.2).describe("Padding round the reflection points, m"),
+    surfaces: z.array(surfaceIdSchema).min(1).max(6).optional(),
+    panel: z.object({ widthM: z.number().min(0.1).max(5), heightM: z.number().min(0.1).max(5) }).default({ widthM: 1.2, heightM: 0.6 }),
+    items: z.array(placedItemSchema).max(200).default([]).describe("Further panels or trap footprints to check together with the suggested panels"),
+    clearanceM: z.number().min(0).max(2).default(0),
+  })
+  .meta({ id: "RoomReflectionsRequest", description: "First reflection points, zones, a suggested panel set and placement checks for a room" });
+export type RoomReflectionsRequest = z.infer<typeof roomReflectionsRequestSchema>;

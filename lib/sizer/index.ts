@@ -29,4 +29,4 @@ export { evaluateCandidates, projectionOf } from "./evaluate";
 export { SEARCH_METHOD, searchTreatment, type SearchProblem, type SearchResult } from "./search";
 export { SIZED_BANDS_HZ, sizeTreatment } from "./size-treatment";
 export { describeCount } from "./reasons";
-export { candidateSchema, materialPricesSchema, sizerInputSchema, sizerLimitsSchema, type SizerInputRequest } from "./schemas";
+export { candidateSchema, materialPricesSchema, sizerInputSchema, sizerLimitsSchema, sizerRequestSchema, type SizerInputRequest, type SizerRequest } from "./schemas";

@@ -109,3 +109,18 @@ export const sizerInputSchema = z
   })
   .meta({ id: "SizerInput", description: "Room, scenario treatment, target, objective, limits and catalogue for bass-trap sizing" });
 export type SizerInputRequest = z.infer<typeof sizerInputSchema>;
+
+/** Body of `POST /api/v1/sizer`: size on top of a stored scenario of a room. */
+export const sizerRequestSchema = z
+  .object({
+    roomId: z.uuid().describe("The room"),
+    scenarioId: z.uuid().describe("A scenario of that room: its treatment is the starting point and its target the default"),
+    objective: z.enum(["depth", "count", "cost"]),
+    limits: sizerLimitsSchema,
+    aim: z.enum(["target", "upper-edge"]).default("target"),
+    target: reverbTargetSchema.optional().describe("Overrides the scenario's target"),
+    catalogue: z.array(candidateSchema).min(1).max(200).optional().describe("Builds to choose from (default: the generic catalogue)"),
+    prices: materialPricesSchema.optional().describe("Material prices (default: the demo prices)"),
+  })
+  .meta({ id: "SizerRequest", description: "Bass-trap sizing for a room's scenario: objective, limits and optionally catalogue, prices and target" });
+export type SizerRequest = z.infer<typeof sizerRequestSchema>;
