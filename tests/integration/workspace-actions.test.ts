@@ -127,7 +127,7 @@ describe("position and surface actions", () => {
     const v = await roomVersion(room);
     const outside = await act(() => movePositionAction(room, sub.id, { xM: 0.3, yM: 4.5, zM: 0.3, version: v }));
     expect(outside).toMatchObject({ ok: false, code: "bad_request" });
-    expect(outside.fields!.yM[0]).toMatch(/inside the room/);
+    expect(outside.fields!.yM![0]).toMatch(/inside the room/);
     const stale = await act(() => movePositionAction(room, sub.id, { xM: 0.4, yM: 0.4, zM: 0.3, version: v - 1 }));
     expect(stale).toMatchObject({ ok: false, code: "conflict" });
     const seat = await testDb().selectFrom("room_positions").select("id").where("room_id", "=", room).where("kind", "=", "seat").executeTakeFirstOrThrow();
