@@ -6,6 +6,7 @@
  */
 import { execFileSync } from "node:child_process";
 import { mkdirSync, readFileSync, writeFileSync } from "node:fs";
+import { availableParallelism, loadavg } from "node:os";
 import { dirname, join } from "node:path";
 import { fileURLToPath } from "node:url";
 import { flatnessMap, logSpacedFrequencies, roomModes } from "../lib/modes/index";
@@ -36,12 +37,16 @@ const median = (v: number[]) => {
 
 // TypeScript: warm-up, then timed runs.
 for (let i = 0; i < 3; i++) flatnessMap(room, options);
-const tsTimes: number[] = [];
+const tsTimes: number[] = [], tsCpu: number[] = [];
 let ts = flatnessMap(room, options);
+const loadBefore = loadavg()[0]!;
 for (let i = 0; i < TS_RUNS; i++) {
+  const c0 = process.cpuUsage();
   const t0 = performance.now();
   ts = flatnessMap(room, options);
   tsTimes.push(performance.now() - t0);
+  const c = process.cpuUsage(c0);
+  tsCpu.push((c.user + c.system) / 1000);
 }
 
 // numpy: same inputs, in a child process; OPENBLAS_CORETYPE / OPENBLAS_L2_SIZE unset for it only.
@@ -66,7 +71,8 @@ const ratio = tsMedian / npMedian;
 const f = (v: number) => v.toFixed(1);
 console.log(`flatnessMap: ${room.lengthM} x ${room.widthM} x ${room.heightM} m, grid ${options.gridX} x ${options.gridY}, ${options.frequenciesHz.length} frequencies 15-250 Hz, modes <= ${options.maxModeFrequencyHz} Hz: ${modesTs} terms (numpy ${py.modes})`);
 console.log(`node ${process.version}; numpy ${py.numpy}; BLAS ${JSON.stringify(py.blas)}; unset for numpy: ${removed.length ? removed.join(", ") : "(neither was set)"}`);
-console.log(`TS    runs (ms): ${tsTimes.map(f).join(" ")}  median ${f(tsMedian)} ms`);
+console.log(`load average before the runs: ${loadBefore.toFixed(2)} on ${availableParallelism()} cores (others' work inflates wall-clock times)`);
+console.log(`TS    runs (ms): ${tsTimes.map(f).join(" ")}  median ${f(tsMedian)} ms (process CPU time median ${f(median(tsCpu))} ms)`);
 console.log(`numpy runs (ms): ${py.timesMs.map(f).join(" ")}  median ${f(npMedian)} ms`);
 console.log(`ratio TS / numpy = ${ratio.toFixed(3)}; max |std-dev difference| = ${maxDiff.toExponential(2)} dB over ${np.length} cells`);
 const okSpeed = tsMedian < 80, okRatio = ratio <= 0.4, okSame = maxDiff < 1e-9 && np.length === ts.stdDevDb.length && py.modes === modesTs;

@@ -58,8 +58,11 @@ export function pairSpectra(room: RectRoom, set: ModeSet, sources: SoundSource[]
     if (index[key]! < 0) { index[key] = pnx.length; pnx.push(set.nx[n]!); pny.push(set.ny[n]!); }
   }
   const pairs = pnx.length;
-  if (pairs * nf > LIMITS.maxPairFrequencyProducts)
-    throw new RangeError(`maxModeFrequencyHz: this room, ${nf} frequencies and modes up to ${set.frequencyHz[M - 1]!.toFixed(1)} Hz need ${pairs} x ${nf} spectra; the limit is ${LIMITS.maxPairFrequencyProducts}`);
+  if (pairs * nf > LIMITS.maxPairFrequencyProducts || NY * nf > LIMITS.maxRowFrequencyProducts)
+    throw new RangeError(
+      `maxModeFrequencyHz: this room with ${nf} frequencies and modes up to ${set.frequencyHz[M - 1]!.toFixed(1)} Hz needs ` +
+        `${pairs} spectra of ${nf} values and ${NY} rows (limits ${LIMITS.maxPairFrequencyProducts} and ${LIMITS.maxRowFrequencyProducts} values); lower maxModeFrequencyHz or use fewer frequencies`,
+    );
   const W = 2 * nf;
   const B = new Float64Array(pairs * W);
   const kz = (Math.PI * z0) / room.heightM;
@@ -129,6 +132,11 @@ export function multiSourceFlatnessMap(room: RectRoom, options: FlatnessGridOpti
   const sources = checkSources(options.sources, "sources", room);
   const { z0, gridX, gridY, freqs, t60, c, fMax } = checkGridOptions(room, options);
   const set = enumerateModes(room, fMax, c, true, "maxModeFrequencyHz");
+  let NY = 1;
+  for (let n = 0; n < set.count; n++) NY = Math.max(NY, set.ny[n]! + 1);
+  const work = gridX * gridY * freqs.length * ((NY + 1) / 2);
+  if (work > LIMITS.maxFlatnessWork)
+    throw new RangeError(`gridX, gridY: ${gridX} x ${gridY} cells, ${freqs.length} frequencies and modes up to ${fMax} Hz need about ${work.toExponential(1)} operations; the limit is ${LIMITS.maxFlatnessWork.toExponential(0)}`);
   const spectra = pairSpectra(room, set, sources, z0, freqs, t60);
   const stdDevDb = flatnessFromSpectra(spectra, gridX, gridY, options);
   return {

@@ -25,8 +25,14 @@ export const LIMITS = {
   maxReceivers: 400,
   /** Longest source delay, ms. */
   maxDelayMs: 1000,
-  /** Flatness map working memory: (nx, ny) pairs x frequencies at most this (16 bytes each). */
-  maxPairFrequencyProducts: 8_000_000,
+  /** Flatness map working memory: (nx, ny) pairs x frequencies at most this (16 bytes each, 64 MB). */
+  maxPairFrequencyProducts: 4_000_000,
+  /** Flatness map working memory: values of ny x frequencies at most this (8 rows of 16 bytes each, 128 MB). */
+  maxRowFrequencyProducts: 1_000_000,
+  /** Flatness map time: cells x frequencies x (ny values + 1) / 2 at most this (a few seconds). */
+  maxFlatnessWork: 2e10,
+  /** Multi-source response time: modes x frequencies x (sources + receivers) at most this (about a second). */
+  maxResponseWork: 1e9,
 } as const;
 
 /** Level reported for an exact cancellation (|H| below 1e-15), dB: keeps -Infinity out of results. */

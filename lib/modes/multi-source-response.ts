@@ -33,7 +33,11 @@ export function prepareResponse(room: RectRoom, o: MultiSourceResponseOptions) {
   const t60 = checkRt60(o.rt60Seconds);
   const c = checkSpeedOfSound(o.speedOfSound);
   const fMax = checkFrequency(o.maxModeFrequencyHz, "maxModeFrequencyHz");
-  return { sources, receivers: o.receivers, freqs, t60, c, set: enumerateModes(room, fMax, c, true, "maxModeFrequencyHz") };
+  const set = enumerateModes(room, fMax, c, true, "maxModeFrequencyHz");
+  const work = set.count * freqs.length * (sources.length + o.receivers.length);
+  if (work > LIMITS.maxResponseWork)
+    throw new RangeError(`maxModeFrequencyHz: ${set.count} modes x ${freqs.length} frequencies x ${sources.length + o.receivers.length} sources and receivers exceed ${LIMITS.maxResponseWork.toExponential(0)} terms; lower maxModeFrequencyHz or use fewer frequencies or seats`);
+  return { sources, receivers: o.receivers, freqs, t60, c, set };
 }
 
 /**

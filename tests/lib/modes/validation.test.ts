@@ -31,6 +31,9 @@ describe("argument checks (documented: RangeError for a bad value, TypeError for
     ["height above the ceiling", () => flatnessMap(room, { ...grid, heightM: 3.5 }), RangeError, /heightM/],
     ["polarity 0", () => multiSourceResponse(room, { ...ok, sources: [{ position: [1, 1, 1], polarity: 0 as 1 }], receivers: [[2, 2, 2]] }), RangeError, /sources\[0\]\.polarity/],
     ["no sources", () => multiSourceResponse(room, { ...ok, sources: [], receivers: [[2, 2, 2]] }), RangeError, /sources/],
+    ["flatness map needing too much memory (limits.ts)", () => flatnessMap({ lengthM: 0.1, widthM: 100, heightM: 0.1 }, { ...grid, source: [0, 0, 0], heightM: 0, gridX: 1, gridY: 1, frequenciesHz: new Array(2000).fill(50), maxModeFrequencyHz: 1000 }), RangeError, /^maxModeFrequencyHz/],
+    ["flatness map needing too much time (limits.ts)", () => flatnessMap({ lengthM: 2, widthM: 100, heightM: 2 }, { ...grid, source: [0, 0, 0], heightM: 1, gridX: 400, gridY: 400, frequenciesHz: new Array(2000).fill(50), maxModeFrequencyHz: 250 }), RangeError, /^gridX, gridY/],
+    ["multi-source response needing too much time (limits.ts)", () => multiSourceResponse({ lengthM: 20, widthM: 20, heightM: 10 }, { ...ok, sources: [{ position: [0, 0, 0] }], receivers: new Array(400).fill([1, 1, 1]), frequenciesHz: new Array(2000).fill(50), maxModeFrequencyHz: 400 }), RangeError, /^maxModeFrequencyHz/],
     ["negative delay", () => multiSourceResponse(room, { ...ok, sources: [{ position: [1, 1, 1], delayMs: -1 }], receivers: [[2, 2, 2]] }), RangeError, /sources\[0\]\.delayMs/],
   ];
   for (const [what, call, type, msg] of cases) {
