@@ -8,6 +8,7 @@ import { seedDemo } from "../db/seed";
 import { DEMO_ACCOUNTS } from "../db/seed-data";
 import { ensureDevCertificate } from "./services/dev-certificate";
 import { startFakeSmtp, type FakeSmtpHandle } from "./services/fake-smtp";
+import { startLocalProviders, type LocalProviders } from "./services/local-providers";
 import { buildFingerprint, buildIsCurrent, forgetBuild, recordBuild } from "./services/next-build";
 import { createDatabaseIfMissing, ensurePostgres, portIsFree, type PostgresHandle } from "./services/postgres";
 import { type ManagedChild, reapOrphans, runToEnd, seconds, spawnManaged, stopAllChildren, trackChildrenIn, waitForHttp } from "./services/processes";
@@ -29,6 +30,7 @@ const t0 = Date.now();
 
 let pgStarting: Promise<PostgresHandle> | undefined;
 let smtp: FakeSmtpHandle | undefined;
+let providers: LocalProviders | undefined;
 let server: ManagedChild | undefined;
 let shuttingDown = false;
 let shutdownAt = 0;
@@ -54,6 +56,7 @@ async function shutdown(code: number, why: string): Promise<never> {
   }
   try {
     await smtp?.stop();
+    await providers?.stop();
   } catch (err) {
     console.error(err);
   }
@@ -112,6 +115,9 @@ async function main(): Promise<void> {
     smtpUrl = `smtp://127.0.0.1:${smtpPort}`;
     say(`fake SMTP server on ${smtpUrl} (messages land in the development outbox)`);
   }
+  // Uploads and payments: local fakes of object storage and the payment provider, unless S3_BUCKET / STRIPE_SECRET_KEY are set.
+  providers = await startLocalProviders({ root, s3Port: Number(process.env.EIGENROOM_S3_PORT ?? 4569), stripePort: Number(process.env.EIGENROOM_STRIPE_PORT ?? 12111), appUrl, quiet: true });
+  for (const note of providers.notes) say(note);
   // Issued reports are signed; without SIGNING_P12_PATH a self-signed development certificate is used.
   const signing = process.env.SIGNING_P12_PATH ? undefined : ensureDevCertificate(root);
   if (signing) say(`${signing.created ? "created the" : "using the"} development signing certificate ${path.relative(root, signing.p12Path)} (SHA-256 ${signing.fingerprintSha256.slice(0, 23)}…)`);
@@ -123,6 +129,7 @@ async function main(): Promise<void> {
     DATABASE_URL: databaseUrl,
     SMTP_URL: smtpUrl,
     APP_URL: appUrl,
+    ...providers.env,
     ...(signing && { SIGNING_P12_PATH: signing.p12Path, SIGNING_P12_PASSWORD: signing.password }),
   };
   if (shuttingDown) return;

@@ -14,6 +14,7 @@ import { migrateToLatest } from "../db/migrate";
 import { seedDemo } from "../db/seed";
 import { ensureDevCertificate } from "./services/dev-certificate";
 import { startFakeSmtp, type FakeSmtpHandle } from "./services/fake-smtp";
+import { startLocalProviders, type LocalProviders } from "./services/local-providers";
 import { buildFingerprint, buildIsCurrent, forgetBuild, recordBuild } from "./services/next-build";
 import { ensurePostgres, freePort, portIsFree, recreateDatabase, type PostgresHandle } from "./services/postgres";
 import { reapOrphans, runToEnd, seconds, spawnManaged, stopAllChildren, trackChildrenIn, waitForHttp } from "./services/processes";
@@ -31,6 +32,7 @@ const tStart = Date.now();
 
 let pgStarting: Promise<PostgresHandle> | undefined;
 let smtp: FakeSmtpHandle | undefined;
+let providers: LocalProviders | undefined;
 let lockHeld = false;
 let finishing = false;
 let finishingAt = 0;
@@ -166,6 +168,7 @@ async function finish(code: number): Promise<never> {
   }
   try {
     await smtp?.stop();
+    await providers?.stop();
   } catch (err) {
     console.error(err);
   }
@@ -236,12 +239,21 @@ async function main(): Promise<number> {
 
   const appPort = await pickPort(Number(process.env.EIGENROOM_TEST_APP_PORT ?? 3100), "test app");
   const appUrl = `http://127.0.0.1:${appPort}`;
+  // Uploads and payments for the app under test (integration tests start their own in-process fakes).
+  const providersOk = await phase("fake S3 + payment provider", async () => {
+    const s3Port = await pickPort(Number(process.env.EIGENROOM_TEST_S3_PORT ?? 4579), "test S3");
+    const stripePort = await pickPort(Number(process.env.EIGENROOM_TEST_STRIPE_PORT ?? 12121), "test payments");
+    providers = await startLocalProviders({ root, s3Dir: path.join(root, ".data", "s3-test"), freshS3: true, s3Port, stripePort, appUrl, quiet: true });
+    return { outcome: "passed", note: providers.notes.join("; ") || "configured by the environment" };
+  });
+  if (!providersOk) return 1;
   const testEnv: NodeJS.ProcessEnv = {
     ...process.env,
     NEXT_TELEMETRY_DISABLED: "1",
     DATABASE_URL: databaseUrl,
     SMTP_URL: smtpUrl,
     APP_URL: appUrl,
+    ...providers?.env,
     MAIL_FROM: "Eigenroom <no-reply@eigenroom.invalid>",
     NEXT_DIST_DIR: DIST_DIR,
     ...(signing && { SIGNING_P12_PATH: signing.p12Path, SIGNING_P12_PASSWORD: signing.password }),

@@ -1,6 +1,7 @@
 // The local stand-ins for object storage and the payment provider, started together by npm start and
 // npm test unless the environment already points at real ones (S3_BUCKET / STRIPE_SECRET_KEY set).
 import { randomBytes } from "node:crypto";
+import { rm } from "node:fs/promises";
 import path from "node:path";
 import { startFakeS3, type FakeS3Handle } from "./fake-s3";
 import { startFakeStripe, type FakeStripeHandle } from "./fake-stripe";
@@ -12,7 +13,7 @@ export interface LocalProviders {
   stop(): Promise<void>;
 }
 
-export async function startLocalProviders(opts: { root: string; s3Dir?: string; s3Port: number; stripePort: number; appUrl: string; quiet?: boolean }): Promise<LocalProviders> {
+export async function startLocalProviders(opts: { root: string; s3Dir?: string; s3Port: number; stripePort: number; appUrl: string; quiet?: boolean; freshS3?: boolean }): Promise<LocalProviders> {
   const env: Record<string, string> = {};
   const notes: string[] = [];
   const log = opts.quiet ? () => {} : undefined;
@@ -20,6 +21,8 @@ export async function startLocalProviders(opts: { root: string; s3Dir?: string; 
   let stripe: FakeStripeHandle | undefined;
   if (!process.env.S3_BUCKET) {
     const dir = opts.s3Dir ?? path.join(opts.root, ".data", "s3");
+    // The test database is new each run; so is its bucket.
+    if (opts.freshS3) await rm(dir, { recursive: true, force: true });
     s3 = await startFakeS3({ port: opts.s3Port, dir, bucket: "eigenroom-local", accessKeyId: "eigenroom-local", log });
     Object.assign(env, { S3_ENDPOINT: s3.endpoint, S3_BUCKET: "eigenroom-local", S3_ACCESS_KEY_ID: "eigenroom-local", S3_SECRET_ACCESS_KEY: "eigenroom-local-secret", S3_REGION: "us-east-1" });
     notes.push(`fake S3 on ${s3.endpoint} (files in ${path.relative(opts.root, dir)})`);
