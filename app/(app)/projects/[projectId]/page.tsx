@@ -68,6 +68,7 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
           ))}
         </ul>
       )}
+      {await import("@/components/payments/project-invoices").then(({ ProjectInvoicesPanel }) => <ProjectInvoicesPanel actor={actor} project={project} />)}
     </>
   );
 }

@@ -62,6 +62,7 @@ export default async function RoomPage({ params }: { params: Promise<{ roomId: s
         <div className="mt-4">
           <Notice>Your engineer&apos;s findings and recommendation for this room reach you in the signed report.</Notice>
         </div>
+        {await import("@/components/files/room-files-panel").then(({ RoomFilesPanel }) => <RoomFilesPanel actor={actor} roomId={room.id} />)}
       </>
     );
   }
@@ -77,6 +78,7 @@ export default async function RoomPage({ params }: { params: Promise<{ roomId: s
       <Suspense>
         <RoomWorkspace roomId={room.id} initial={workspace} initialScenarios={scenarios} initialBuilds={builds} units={u} canSaveBuilds={canInFirm(actor, "library.manage")} />
       </Suspense>
+      {await import("@/components/files/room-files-panel").then(({ RoomFilesPanel }) => <RoomFilesPanel actor={actor} roomId={room.id} />)}
     </>
   );
 }
