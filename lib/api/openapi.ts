@@ -1,4 +1,6 @@
 import { z } from "zod";
+import { REPORT_ENDPOINTS } from "@/lib/report/openapi";
+import { DESIGN_ENDPOINTS } from "./openapi-design";
 import { WORKSPACE_ENDPOINTS } from "./openapi-workspace";
 import { flatnessMapRequestSchema, modalResponseRequestSchema, modesRequestSchema } from "@/lib/modes/schemas";
 import { absorberRatingRequestSchema, absorberSpectrumRequestSchema } from "@/lib/porous/schemas";
@@ -49,12 +51,9 @@ const ENDPOINTS: EndpointDoc[] = [
   { method: "get", path: "/openapi.json", summary: "This document", tag: "Meta", success: 200, public: true },
 ];
 
-const endpoints: EndpointDoc[] = [...ENDPOINTS, ...WORKSPACE_ENDPOINTS];
-
-/** Computation modules add their endpoints here (see lib/api/openapi-engines.ts). */
-export function documentEndpoints(more: EndpointDoc[]): void {
-  for (const e of more) if (!endpoints.some((x) => x.method === e.method && x.path === e.path)) endpoints.push(e);
-}
+// Every topic lists its endpoints in a file of its own, imported here: a route bundle never has to be
+// loaded for its documentation to appear.
+const endpoints: EndpointDoc[] = [...ENDPOINTS, ...WORKSPACE_ENDPOINTS, ...DESIGN_ENDPOINTS, ...REPORT_ENDPOINTS];
 
 const errorSchema = {
   type: "object",

@@ -2,20 +2,8 @@ import { db } from "@/db/client";
 import { loadAnalysisRoom } from "@/db/queries/analysis";
 import { roomFor } from "@/db/queries/rooms";
 import { AppError } from "@/lib/api/errors";
-import { documentEndpoints } from "@/lib/api/openapi";
 import { apiRoute, readJson } from "@/lib/api/route";
 import { checkPlacement, firstReflections, listeningAreaSeats, reflectionZones, roomReflectionsRequestSchema, suggestPanels, type PlacedItem } from "@/lib/reflections";
-
-documentEndpoints([
-  {
-    method: "post",
-    path: "/reflections",
-    summary: "First reflection points from the room's main speakers to its seats (or a listening area), the zones that cover them, a suggested panel set and its placement checks",
-    tag: "Treatment",
-    body: roomReflectionsRequestSchema,
-    success: 200,
-  },
-]);
 
 /** Reflection points, zones, panels and placement problems for a stored room (read access). */
 export const POST = apiRoute(async ({ request, actor }) => {

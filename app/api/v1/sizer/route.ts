@@ -3,20 +3,8 @@ import { loadAnalysisRoom } from "@/db/queries/analysis";
 import { getScenario } from "@/db/queries/scenarios";
 import { reverbSurfaces } from "@/lib/analysis";
 import { AppError } from "@/lib/api/errors";
-import { documentEndpoints } from "@/lib/api/openapi";
 import { apiRoute, readJson } from "@/lib/api/route";
 import { sizeTreatment, sizerRequestSchema } from "@/lib/sizer";
-
-documentEndpoints([
-  {
-    method: "post",
-    path: "/sizer",
-    summary: "Bass-trap sizing on top of a scenario: the builds, counts and places that bring 63–250 Hz to the target with the least depth, count or cost, with RT before/after, reasons and limits",
-    tag: "Treatment",
-    body: sizerRequestSchema,
-    success: 200,
-  },
-]);
 
 /** Sizes low-frequency treatment for a room's scenario (read access to the room's workspace). */
 export const POST = apiRoute(async ({ request, actor }) => {
