@@ -46,3 +46,49 @@ export function invitationMail(p: { firmName: string; inviterName: string; name:
     html: layout(p.firmName, lines, { label: "Accept the invitation", url: p.url }, foot),
   };
 }
+
+export function reportIssuedMail(p: {
+  firmName: string;
+  engineerName: string;
+  clientName: string;
+  projectName: string;
+  roomName: string;
+  reportNumber: string;
+  revision: number;
+  summary: string;
+  url: string;
+  attached: boolean;
+  firstRevision: boolean;
+}): MailBody {
+  const what = `${p.reportNumber}, revision ${p.revision}`;
+  const lines = [
+    `Hello ${p.clientName},`,
+    p.firstRevision
+      ? `${p.engineerName} has finished the recommendation report for ${p.roomName} (${p.projectName}): ${what}.`
+      : `${p.engineerName} has issued a new revision of the recommendation report for ${p.roomName} (${p.projectName}): ${what}. It replaces the earlier revision.`,
+    p.summary,
+    p.attached
+      ? "The signed PDF is attached. You can also read and download it, approve the recommendation or ask a question on your project page:"
+      : "Read and download the signed PDF, approve the recommendation or ask a question on your project page:",
+  ];
+  const foot = `The PDF is digitally signed by ${p.firmName}. To check that a copy is genuine, open ${new URL("/verify", p.url).href} and upload it.`;
+  return {
+    subject: `${p.firmName}: your room report ${what}`,
+    text: `${lines.join("\n\n")}\n\n${p.url}\n\n${foot}\n`,
+    html: layout(p.firmName, lines, { label: "Open the report", url: p.url }, foot),
+  };
+}
+
+export function reportCommentMail(p: { firmName: string; toName: string; fromName: string; kind: "question" | "answer"; reportNumber: string; roomName: string; body: string; url: string }): MailBody {
+  const lines = [
+    `Hello ${p.toName},`,
+    p.kind === "question" ? `${p.fromName} asked a question about report ${p.reportNumber} (${p.roomName}):` : `${p.fromName} answered on report ${p.reportNumber} (${p.roomName}):`,
+    p.body,
+  ];
+  const foot = "Reply on the report page so that the whole thread stays with the report.";
+  return {
+    subject: `${p.kind === "question" ? "Question" : "Answer"} on ${p.reportNumber} (${p.roomName})`,
+    text: `${lines.join("\n\n")}\n\n${p.url}\n\n${foot}\n`,
+    html: layout(p.firmName, lines, { label: "Open the thread", url: p.url }, foot),
+  };
+}
