@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { REPORT_ENDPOINTS } from "@/lib/report/openapi";
 import { DESIGN_ENDPOINTS } from "./openapi-design";
+import { FILES_PAYMENTS_ENDPOINTS } from "./openapi-files-payments";
 import { WORKSPACE_ENDPOINTS } from "./openapi-workspace";
 import { flatnessMapRequestSchema, modalResponseRequestSchema, modesRequestSchema } from "@/lib/modes/schemas";
 import { absorberRatingRequestSchema, absorberSpectrumRequestSchema } from "@/lib/porous/schemas";
@@ -53,7 +54,7 @@ const ENDPOINTS: EndpointDoc[] = [
 
 // Every topic lists its endpoints in a file of its own, imported here: a route bundle never has to be
 // loaded for its documentation to appear.
-const endpoints: EndpointDoc[] = [...ENDPOINTS, ...WORKSPACE_ENDPOINTS, ...DESIGN_ENDPOINTS, ...REPORT_ENDPOINTS];
+const endpoints: EndpointDoc[] = [...ENDPOINTS, ...WORKSPACE_ENDPOINTS, ...DESIGN_ENDPOINTS, ...REPORT_ENDPOINTS, ...FILES_PAYMENTS_ENDPOINTS];
 
 const errorSchema = {
   type: "object",
