@@ -1,12 +1,13 @@
 /**
- * Mean and population variance of ln(p) over a run of positive powers p (internal, used by the
- * flatness maps where millions of logarithms dominate the time).
+ * Population variance of ln |H|^2 over frequency for a cell and its mirror image (internal, used by the
+ * flatness maps, where millions of logarithms dominate the time).
  *
  * Each p = 2^e * m with 1 <= m < 2 is read from its IEEE-754 bits; m is split by its top 8 mantissa
  * bits into m = c_k (1 + r) with c_k = 1 + (k + 1/2)/256, |r| < 1/512, and
  *   ln p = e ln 2 + ln c_k + ln(1 + r),  ln(1 + r) = r - r^2/2 + r^3/3 - r^4/4 + O(r^5)
  * (Mercator series, Abramowitz & Stegun 4.1.24). The truncation error is below r^5/5 < 6e-15, so the
  * result agrees with Math.log to about 1e-14 absolute. Typed arrays only: runs in a Web Worker as is.
+ * On a big-endian engine (none known) the code falls back to Math.log.
  */
 
 const TABLE_BITS = 8;
