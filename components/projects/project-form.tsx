@@ -8,7 +8,7 @@ import { toast } from "sonner";
 import type { z } from "zod";
 import { createProjectAction, updateProjectAction } from "@/app/(app)/projects/actions";
 import { Button, ButtonLink } from "@/components/ui/button";
-import { Notice } from "@/components/ui/card";
+import { ActionError } from "@/components/ui/action-error";
 import { describedBy, Field, Input, Select, Textarea } from "@/components/ui/field";
 import { PROJECT_STATUS_LABEL, PROJECT_STATUSES, projectInputSchema, type ProjectInput } from "@/lib/schemas/project";
 
@@ -42,16 +42,7 @@ export function ProjectForm({ initial, projectId, version, clients, builders }: 
 
   return (
     <form onSubmit={onSubmit} className="max-w-2xl space-y-5" noValidate>
-      {formError && (
-        <Notice tone="error">
-          {formError.message}{" "}
-          {formError.conflict && (
-            <button type="button" className="font-medium underline" onClick={() => router.refresh()}>
-              Reload
-            </button>
-          )}
-        </Notice>
-      )}
+      <ActionError error={formError} />
       <div className="grid gap-5 sm:grid-cols-2">
         <Field id="name" label="Project name" error={err("name")}>
           <Input {...describedBy("name", err("name"))} {...register("name")} autoFocus />

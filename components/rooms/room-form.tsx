@@ -6,7 +6,7 @@ import { useForm } from "react-hook-form";
 import { toast } from "sonner";
 import { createRoomAction, updateRoomAction } from "@/app/(app)/projects/actions";
 import { Button, ButtonLink } from "@/components/ui/button";
-import { Notice } from "@/components/ui/card";
+import { ActionError } from "@/components/ui/action-error";
 import { describedBy, Field, Input, Textarea } from "@/components/ui/field";
 import { fieldErrors } from "@/lib/api/zod-fields";
 import { roomInputSchema, type RoomInput } from "@/lib/schemas/room";
@@ -95,16 +95,7 @@ export function RoomForm({ projectId, roomId, version, initial, initialUnits }: 
 
   return (
     <form onSubmit={onSubmit} className="max-w-2xl space-y-5" noValidate>
-      {formError && (
-        <Notice tone="error">
-          {formError.message}{" "}
-          {formError.conflict && (
-            <button type="button" className="font-medium underline" onClick={() => router.refresh()}>
-              Reload
-            </button>
-          )}
-        </Notice>
-      )}
+      <ActionError error={formError} />
       <Field id="name" label="Room name" error={err("name")}>
         <Input {...describedBy("name", err("name"))} {...register("name")} autoFocus />
       </Field>
