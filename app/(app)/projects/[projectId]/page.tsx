@@ -4,6 +4,7 @@ import { notFound } from "next/navigation";
 import { db } from "@/db/client";
 import { findProject } from "@/db/queries/projects";
 import { listRooms } from "@/db/queries/rooms";
+import { ProjectReports } from "@/components/reports/project-reports";
 import { DeleteProjectButton } from "@/components/projects/project-actions";
 import { ButtonLink } from "@/components/ui/button";
 import { Card, EmptyState, PageHeader } from "@/components/ui/card";
@@ -68,6 +69,7 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
           ))}
         </ul>
       )}
+      <ProjectReports projectId={project.id} />
       {await import("@/components/payments/project-invoices").then(({ ProjectInvoicesPanel }) => <ProjectInvoicesPanel actor={actor} project={project} />)}
     </>
   );
