@@ -20,7 +20,8 @@ export type FirmAction =
   | "engine.run"
   | "report.settings"
   | "fee.manage"
-  | LibraryAction;
+  | LibraryAction
+  | PriceListAction;
 
 /** Actions on one project (and the rooms and analyses inside it). */
 export type ProjectAction =
@@ -82,6 +83,18 @@ const WORKSPACE_ACTIONS: Record<Role, readonly WorkspaceAction[]> = {
   client: [],
 };
 
+/**
+ * The firm's price list and stock sizes for build sheets: the owner sets it; engineers and builders
+ * read it (build sheets show the materials cost); clients neither.
+ */
+export type PriceListAction = "price-list.read" | "price-list.manage";
+const PRICE_LIST_ACTIONS: Record<Role, readonly PriceListAction[]> = {
+  owner: ["price-list.read", "price-list.manage"],
+  engineer: ["price-list.read"],
+  builder: ["price-list.read"],
+  client: [],
+};
+
 const FIRM_ACTIONS: Record<Role, readonly FirmAction[]> = {
   owner: ["project.list", "project.create", "member.list", "member.manage", "outbox.read", "engine.run", "report.settings", "fee.manage"],
   engineer: ["project.list", "project.create", "member.list", "engine.run"],
@@ -91,7 +104,11 @@ const FIRM_ACTIONS: Record<Role, readonly FirmAction[]> = {
 
 /** May the actor do this firm-wide action? */
 export function canInFirm(actor: Actor, action: FirmAction): boolean {
-  return FIRM_ACTIONS[actor.role].includes(action) || (LIBRARY_ACTIONS[actor.role] as readonly FirmAction[]).includes(action);
+  return (
+    FIRM_ACTIONS[actor.role].includes(action) ||
+    (LIBRARY_ACTIONS[actor.role] as readonly FirmAction[]).includes(action) ||
+    (PRICE_LIST_ACTIONS[actor.role] as readonly FirmAction[]).includes(action)
+  );
 }
 
 /** The facts about a project that permissions depend on. */
@@ -155,6 +172,7 @@ export const ASSIGNABLE_ROLES: readonly Role[] = ["owner", "engineer", "builder"
 export function navigationFor(actor: Actor): { href: string; label: string }[] {
   const items = [{ href: "/projects", label: actor.role === "client" ? "My projects" : actor.role === "builder" ? "My jobs" : "Projects" }];
   if (canInFirm(actor, "member.list")) items.push({ href: "/members", label: "Team" });
+  if (canInFirm(actor, "fee.manage")) items.push({ href: "/settings/fees", label: "Fees" });
   if (canInFirm(actor, "outbox.read")) items.push({ href: "/dev/outbox", label: "Outbox" });
   return items;
 }
