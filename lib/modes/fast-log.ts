@@ -72,6 +72,49 @@ export function mirroredLevelVariance(
   out[1] = Math.max(0, q2 / nf - m2 * m2);
 }
 
+/**
+ * The four-cell form of mirroredLevelVariance for the quarter-point path of the flatness kernel: with
+ * E+ = A + B, E- = A - B (A from A[ao], B from B[bo]), O (from O[oo]) and P (from P[po]), writes the
+ * variances of ln|E+ + O|^2, ln|E+ - O|^2, ln|E- + P|^2 and ln|E- - P|^2 to out[0..3]. One pass loads
+ * A and B once for four cells.
+ */
+export function quadLevelVariance(
+  A: Float64Array, B: Float64Array, ab: number, O: Float64Array, P: Float64Array, op: number,
+  pw: Float64Array, bits: Int32Array, nf: number, out: Float64Array,
+): void {
+  if (!LITTLE_ENDIAN) {
+    mirroredPlain(A, ab, B, ab, 1, O, op, nf, out);
+    const o01 = [out[0]!, out[1]!];
+    mirroredPlain(A, ab, B, ab, -1, P, op, nf, out);
+    out[2] = out[0]!; out[3] = out[1]!; out[0] = o01[0]!; out[1] = o01[1]!;
+    return;
+  }
+  let K1 = 0, K2 = 0, K3 = 0, K4 = 0, s1 = 0, q1 = 0, s2 = 0, q2 = 0, s3 = 0, q3 = 0, s4 = 0, q4 = 0;
+  for (let f = 0; f < nf; f++) {
+    const t = ab + 2 * f, u = op + 2 * f;
+    const a0 = A[t]!, a1 = A[t + 1]!, b0 = B[t]!, b1 = B[t + 1]!;
+    const pr = a0 + b0, pi = a1 + b1, mr = a0 - b0, mi = a1 - b1;
+    const or = O[u]!, oi = O[u + 1]!, qr = P[u]!, qi = P[u + 1]!;
+    let p1 = (pr + or) * (pr + or) + (pi + oi) * (pi + oi), p2 = (pr - or) * (pr - or) + (pi - oi) * (pi - oi);
+    let p3 = (mr + qr) * (mr + qr) + (mi + qi) * (mi + qi), p4 = (mr - qr) * (mr - qr) + (mi - qi) * (mi - qi);
+    if (!(p1 > LN_FLOOR)) p1 = LN_FLOOR;
+    if (!(p2 > LN_FLOOR)) p2 = LN_FLOOR;
+    if (!(p3 > LN_FLOOR)) p3 = LN_FLOOR;
+    if (!(p4 > LN_FLOOR)) p4 = LN_FLOOR;
+    pw[0] = p1; pw[1] = p2; pw[2] = p3; pw[3] = p4;
+    const l1 = lnFromBits(p1, bits[1]!), l2 = lnFromBits(p2, bits[3]!), l3 = lnFromBits(p3, bits[5]!), l4 = lnFromBits(p4, bits[7]!);
+    // Shift by the first value: the variance of (l - K) is that of l and loses less to cancellation.
+    if (f === 0) { K1 = l1; K2 = l2; K3 = l3; K4 = l4; }
+    const d1 = l1 - K1, d2 = l2 - K2, d3 = l3 - K3, d4 = l4 - K4;
+    s1 += d1; q1 += d1 * d1; s2 += d2; q2 += d2 * d2; s3 += d3; q3 += d3 * d3; s4 += d4; q4 += d4 * d4;
+  }
+  const m1 = s1 / nf, m2 = s2 / nf, m3 = s3 / nf, m4 = s4 / nf;
+  out[0] = Math.max(0, q1 / nf - m1 * m1);
+  out[1] = Math.max(0, q2 / nf - m2 * m2);
+  out[2] = Math.max(0, q3 / nf - m3 * m3);
+  out[3] = Math.max(0, q4 / nf - m4 * m4);
+}
+
 function mirroredPlain(A: Float64Array, ao: number, B: Float64Array, bo: number, sign: number, O: Float64Array, oo: number, nf: number, out: Float64Array): void {
   const l1 = new Float64Array(nf), l2 = new Float64Array(nf);
   for (let f = 0; f < nf; f++) {

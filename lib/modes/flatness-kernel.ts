@@ -16,7 +16,7 @@
  * Typed arrays throughout, scratch allocated once per call, no allocation in the loops.
  */
 import { dotKernel, type DotKernel } from "./dense-rows";
-import { mirroredLevelVariance } from "./fast-log";
+import { mirroredLevelVariance, quadLevelVariance } from "./fast-log";
 import type { ProgressOptions } from "./types";
 import { throwIfAborted } from "./validate";
 
@@ -105,14 +105,17 @@ function step3RowQuarter(c: Step3, G: Float64Array, g0: number, ix: number): voi
     dotO(accO2, 0, W, G, gOddRows, 0, g0, cyOPartner, j0 * nyOdd, nyOdd, W);
     for (let q = 0; q < 8 && j0 + q < hq; q++) {
       const j = j0 + q, jp = hy - 1 - j;
-      mirroredLevelVariance(accE, q * W, accE2, q * W, 1, accO, q * W, pw, pwBits, nf, variances);
+      if (jp === j) {
+        mirroredLevelVariance(accE, q * W, accE2, q * W, 1, accO, q * W, pw, pwBits, nf, variances);
+        out[ix * gridY + j] = toDb * Math.sqrt(variances[0]!);
+        out[ix * gridY + gridY - 1 - j] = toDb * Math.sqrt(variances[1]!);
+        continue;
+      }
+      quadLevelVariance(accE, accE2, q * W, accO, accO2, q * W, pw, pwBits, nf, variances);
       out[ix * gridY + j] = toDb * Math.sqrt(variances[0]!);
       out[ix * gridY + gridY - 1 - j] = toDb * Math.sqrt(variances[1]!);
-      if (jp !== j) {
-        mirroredLevelVariance(accE, q * W, accE2, q * W, -1, accO2, q * W, pw, pwBits, nf, variances);
-        out[ix * gridY + jp] = toDb * Math.sqrt(variances[0]!);
-        out[ix * gridY + gridY - 1 - jp] = toDb * Math.sqrt(variances[1]!);
-      }
+      out[ix * gridY + jp] = toDb * Math.sqrt(variances[2]!);
+      out[ix * gridY + gridY - 1 - jp] = toDb * Math.sqrt(variances[3]!);
     }
   }
 }
@@ -162,13 +165,13 @@ export function flatnessFromSpectra(spec: PairSpectra, gridX: number, gridY: num
     for (let k = 0; k < n2; k++) cy2[j * n2 + k] = Cy[(4 * k + 2) * hy + j]!;
     for (let k = 0; k < nyOdd; k++) cyOPartner[j * nyOdd + k] = Cy[(2 * k + 1) * hy + (hy - 1 - j)]!;
   }
-  const pw = new Float64Array(2);
+  const pw = new Float64Array(4);
   const ctx: Step3 = {
     nf, W, hy, gridY,
     gEvenRows, gOddRows, cyE, cyO, nyEven, nyOdd, dotE: dotKernel(nyEven, 8), dotO: dotKernel(nyOdd, 8),
     quarter, g0Rows, g2Rows, cy0, cy2, cyOPartner, n0, n2, dot0: dotKernel(n0, 8), dot2: dotKernel(n2, 8),
     accE: new Float64Array(8 * W), accE2: new Float64Array(8 * W), accO: new Float64Array(8 * W), accO2: new Float64Array(8 * W),
-    pw, pwBits: new Int32Array(pw.buffer), variances: new Float64Array(2), out: new Float64Array(gridX * gridY),
+    pw, pwBits: new Int32Array(pw.buffer), variances: new Float64Array(4), out: new Float64Array(gridX * gridY),
   };
   const rowStep = quarter ? step3RowQuarter : step3Row;
 
