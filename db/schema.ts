@@ -101,85 +101,6 @@ export interface DemoSeedTable {
   seeded_at: Timestamp;
 }
 
-// Room workspace (migration 2026-12-01T20-00-workspace). JSON columns hold values of the zod schemas
-// in lib/schemas/workspace.ts; they are written as JSON text and read back parsed.
-type Json<T> = ColumnType<T, string, string>;
-
-export interface RoomSurfacesTable {
-  room_id: string;
-  surface: "front" | "rear" | "left" | "right" | "floor" | "ceiling";
-  finish: Json<unknown>;
-  openings: ColumnType<unknown, string | undefined, string>;
-  assumed: Defaulted<boolean>;
-  updated_at: Timestamp;
-}
-
-export interface RoomPositionsTable {
-  id: Generated<string>;
-  room_id: string;
-  kind: "seat" | "main-speaker" | "subwoofer";
-  name: string;
-  x_m: number;
-  y_m: number;
-  z_m: number;
-  is_main: Defaulted<boolean>;
-  delay_ms: Defaulted<number>;
-  polarity: Defaulted<number>;
-  drives_bass: Defaulted<boolean>;
-  sort_order: Defaulted<number>;
-  created_at: Timestamp;
-  updated_at: Timestamp;
-}
-
-export interface ScenariosTable {
-  id: Generated<string>;
-  room_id: string;
-  name: string;
-  notes: Defaulted<string>;
-  is_baseline: Defaulted<boolean>;
-  archived_at: ColumnType<Date | null, Date | string | null | undefined, Date | string | null>;
-  target: ColumnType<unknown, string | undefined, string>;
-  version: Defaulted<number>;
-  results: ColumnType<unknown | null, string | null | undefined, string | null>;
-  engine_version: string | null;
-  inputs_hash: string | null;
-  computed_at: ColumnType<Date | null, Date | string | null | undefined, Date | string | null>;
-  sort_order: Defaulted<number>;
-  created_by: string | null;
-  created_at: Timestamp;
-  updated_at: Timestamp;
-}
-
-export interface TreatmentItemsTable {
-  id: Generated<string>;
-  scenario_id: string;
-  name: string;
-  kind: "porous-panel" | "corner-trap" | "membrane" | "perforated";
-  spec: Json<unknown>;
-  count: number;
-  placements: ColumnType<unknown, string | undefined, string>;
-  unit_cost: Defaulted<number>;
-  unit_mass_kg: number | null;
-  build_id: string | null;
-  notes: Defaulted<string>;
-  sort_order: Defaulted<number>;
-  created_at: Timestamp;
-  updated_at: Timestamp;
-}
-
-export interface BuildsTable {
-  id: Generated<string>;
-  firm_id: string;
-  name: string;
-  kind: "porous-panel" | "corner-trap" | "membrane" | "perforated";
-  spec: Json<unknown>;
-  notes: Defaulted<string>;
-  version: Defaulted<number>;
-  created_by: string | null;
-  created_at: Timestamp;
-  updated_at: Timestamp;
-}
-
 export type PaperSize = "A4" | "LETTER";
 export type ReportRevisionStatus = "draft" | "issued" | "superseded";
 export type ReportEventKind = "drafted" | "issued" | "superseded" | "sent" | "viewed" | "downloaded" | "approved" | "question" | "answer";
@@ -261,6 +182,85 @@ export interface ReportApprovalsTable {
   approved_at: Timestamp;
 }
 
+// Room workspace (migration 2026-12-01T20-00-workspace). JSON columns hold values of the zod schemas
+// in lib/schemas/workspace.ts; they are written as JSON text and read back parsed.
+type Json<T> = ColumnType<T, string, string>;
+
+export interface RoomSurfacesTable {
+  room_id: string;
+  surface: "front" | "rear" | "left" | "right" | "floor" | "ceiling";
+  finish: Json<unknown>;
+  openings: ColumnType<unknown, string | undefined, string>;
+  assumed: Defaulted<boolean>;
+  updated_at: Timestamp;
+}
+
+export interface RoomPositionsTable {
+  id: Generated<string>;
+  room_id: string;
+  kind: "seat" | "main-speaker" | "subwoofer";
+  name: string;
+  x_m: number;
+  y_m: number;
+  z_m: number;
+  is_main: Defaulted<boolean>;
+  delay_ms: Defaulted<number>;
+  polarity: Defaulted<number>;
+  drives_bass: Defaulted<boolean>;
+  sort_order: Defaulted<number>;
+  created_at: Timestamp;
+  updated_at: Timestamp;
+}
+
+export interface ScenariosTable {
+  id: Generated<string>;
+  room_id: string;
+  name: string;
+  notes: Defaulted<string>;
+  is_baseline: Defaulted<boolean>;
+  archived_at: ColumnType<Date | null, Date | string | null | undefined, Date | string | null>;
+  target: ColumnType<unknown, string | undefined, string>;
+  version: Defaulted<number>;
+  results: ColumnType<unknown | null, string | null | undefined, string | null>;
+  engine_version: string | null;
+  inputs_hash: string | null;
+  computed_at: ColumnType<Date | null, Date | string | null | undefined, Date | string | null>;
+  sort_order: Defaulted<number>;
+  created_by: string | null;
+  created_at: Timestamp;
+  updated_at: Timestamp;
+}
+
+export interface TreatmentItemsTable {
+  id: Generated<string>;
+  scenario_id: string;
+  name: string;
+  kind: "porous-panel" | "corner-trap" | "membrane" | "perforated";
+  spec: Json<unknown>;
+  count: number;
+  placements: ColumnType<unknown, string | undefined, string>;
+  unit_cost: Defaulted<number>;
+  unit_mass_kg: number | null;
+  build_id: string | null;
+  notes: Defaulted<string>;
+  sort_order: Defaulted<number>;
+  created_at: Timestamp;
+  updated_at: Timestamp;
+}
+
+export interface BuildsTable {
+  id: Generated<string>;
+  firm_id: string;
+  name: string;
+  kind: "porous-panel" | "corner-trap" | "membrane" | "perforated";
+  spec: Json<unknown>;
+  notes: Defaulted<string>;
+  version: Defaulted<number>;
+  created_by: string | null;
+  created_at: Timestamp;
+  updated_at: Timestamp;
+}
+
 export type RoomFileKind = "photo" | "drawing" | "client-file";
 export type StoredContentType = "image/jpeg" | "image/png" | "image/webp" | "application/pdf";
 export type FeeBasis = "per-report" | "per-project";
@@ -329,6 +329,57 @@ export interface PaymentEventsTable {
   received_at: Timestamp;
 }
 
+// Build sheet and site progress (migration 2026-12-01T21-15-build-progress).
+export interface FirmPriceListsTable {
+  firm_id: string;
+  currency: Defaulted<string>;
+  lumber_thickness_m: number;
+  lumber_width_m: number;
+  lumber_density_kg_m3: Defaulted<number>;
+  lumber_basis: "per-metre" | "per-board";
+  lumber_price_per_m: Defaulted<number>;
+  /** [{ lengthM, price }] */
+  boards: ColumnType<{ lengthM: number; price: number }[], string, string>;
+  kerf_m: Defaulted<number>;
+  slab_standard: UnitSystem;
+  slab_length_m: number;
+  slab_width_m: number;
+  /** [{ thicknessM, price }] */
+  slab_prices: ColumnType<{ thicknessM: number; price: number }[], string, string>;
+  fabric_price_per_m2: Defaulted<number>;
+  fabric_wrap_m: Defaulted<number>;
+  sheet_length_m: Defaulted<number>;
+  sheet_width_m: Defaulted<number>;
+  sheet_price: Defaulted<number>;
+  screw_price: Defaulted<number>;
+  cleat_price: Defaulted<number>;
+  bracket_price: Defaulted<number>;
+  version: Defaulted<number>;
+  updated_by: string | null;
+  updated_at: Timestamp;
+}
+
+type DateColumn = ColumnType<string | null, string | null | undefined, string | null>;
+
+export interface TreatmentItemProgressTable {
+  item_id: string;
+  built_at: DateColumn;
+  built_by: string | null;
+  built_by_name: string | null;
+  installed_at: DateColumn;
+  installed_by: string | null;
+  installed_by_name: string | null;
+  note: Defaulted<string>;
+  updated_at: Timestamp;
+}
+
+export interface RoomBuildScenariosTable {
+  room_id: string;
+  scenario_id: string;
+  chosen_by: string | null;
+  chosen_at: Timestamp;
+}
+
 export interface Database {
   firms: FirmsTable;
   users: UsersTable;
@@ -357,6 +408,9 @@ export interface Database {
   fees: FeesTable;
   invoices: InvoicesTable;
   payment_events: PaymentEventsTable;
+  firm_price_lists: FirmPriceListsTable;
+  treatment_item_progress: TreatmentItemProgressTable;
+  room_build_scenarios: RoomBuildScenariosTable;
 }
 
 export type UserRow = Selectable<UsersTable>;
