@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { REPORT_ENDPOINTS } from "@/lib/report/openapi";
+import { BUILD_ENDPOINTS } from "./openapi-build";
 import { DESIGN_ENDPOINTS } from "./openapi-design";
 import { FILES_PAYMENTS_ENDPOINTS } from "./openapi-files-payments";
 import { WORKSPACE_ENDPOINTS } from "./openapi-workspace";
@@ -54,7 +55,7 @@ const ENDPOINTS: EndpointDoc[] = [
 
 // Every topic lists its endpoints in a file of its own, imported here: a route bundle never has to be
 // loaded for its documentation to appear.
-const endpoints: EndpointDoc[] = [...ENDPOINTS, ...WORKSPACE_ENDPOINTS, ...DESIGN_ENDPOINTS, ...REPORT_ENDPOINTS, ...FILES_PAYMENTS_ENDPOINTS];
+const endpoints: EndpointDoc[] = [...ENDPOINTS, ...WORKSPACE_ENDPOINTS, ...DESIGN_ENDPOINTS, ...BUILD_ENDPOINTS, ...REPORT_ENDPOINTS, ...FILES_PAYMENTS_ENDPOINTS];
 
 const errorSchema = {
   type: "object",
