@@ -19,7 +19,10 @@ export interface ReportTable {
 }
 
 export interface BuildSheetEntry {
+  /** the item numbers (1-based) that share this build */
   index: number;
+  indices: number[];
+  title: string;
   name: string;
   description: string;
   rating: { alphaW: string; absorptionClass: string; nrc: string; saa: string; indicators: string } | null;
@@ -150,7 +153,7 @@ function alphaCurve(spec: ItemSpec, temperatureC: number): { plot: FrequencyResp
       levelDomainDb: [0, 1.2],
       yTitle: "Absorption coefficient",
     },
-    { width: PLOT_WIDTH, areaHeight: 150 },
+    { width: PLOT_WIDTH, areaHeight: 120 },
   );
   return {
     plot,
@@ -290,7 +293,7 @@ export function buildReportModel(input: ReportInput): ReportModel {
       ]),
     ],
   };
-  const plan = planGeometry(room, rec.analysis.items, 440, 330);
+  const plan = planGeometry(room, rec.analysis.items, 400, 300);
 
   // ---- low frequency
   let lowFrequency: ReportModel["lowFrequency"] = null;
@@ -323,7 +326,7 @@ export function buildReportModel(input: ReportInput): ReportModel {
           shadedBand: m.schroederHz !== null ? { fromHz: m.schroederHz, toHz: 250, label: "above Schroeder" } : undefined,
           yTitle: "Level (dB, relative)",
         },
-        { width: PLOT_WIDTH, areaHeight: 190 },
+        { width: PLOT_WIDTH, areaHeight: 150 },
       );
       responses.push({ seatName: a.name, geometry, caption: `Modal response at ${a.name}: spread ${withUnit(b.spreadDb, 1, "dB")} before, ${withUnit(a.spreadDb, 1, "dB")} after (${R.lowFrequency.spreadBandHz.lowHz}–${R.lowFrequency.spreadBandHz.highHz} Hz).` });
     }
@@ -424,12 +427,24 @@ export function buildReportModel(input: ReportInput): ReportModel {
   };
 
   // ---- treatment plan and builds
-  const builds: BuildSheetEntry[] = rec.analysis.items.map((item, i) => {
+  // Items built the same way share one entry (one α curve), with a row of absorption per item.
+  const groups: { key: string; items: { item: (typeof rec.analysis.items)[number]; index: number }[] }[] = [];
+  rec.analysis.items.forEach((item, i) => {
+    const key = JSON.stringify(item.spec);
+    const g = groups.find((x) => x.key === key);
+    if (g) g.items.push({ item, index: i + 1 });
+    else groups.push({ key, items: [{ item, index: i + 1 }] });
+  });
+  const builds: BuildSheetEntry[] = groups.map((group) => {
+    const item = group.items[0]!.item;
     const res: ItemResult | undefined = R.items.byItem.find((b) => b.id === item.id);
     const curve = alphaCurve(item.spec, room.temperatureC);
     const bands = R.reverb?.bandsHz ?? [63, 125, 250, 500, 1000, 2000, 4000, 8000];
+    const indices = group.items.map((x) => x.index);
     return {
-      index: i + 1,
+      index: indices[0]!,
+      indices,
+      title: group.items.length === 1 ? `${indices[0]}. ${item.name}` : `${indices.join(", ")}. ${group.items.map((x) => x.item.name).join(" · ")} (one build)`,
       name: item.name,
       description: describeSpec(item.spec),
       rating: curve?.rating ?? null,
@@ -437,7 +452,10 @@ export function buildReportModel(input: ReportInput): ReportModel {
       absorption: {
         columns: ["", ...bands.map((f) => bandLabel(f))],
         numeric: [false, ...bands.map(() => true)],
-        rows: res ? [[`All ${item.count} (m²)`, ...res.absorptionM2.map((a) => fixed(a, 2))]] : [],
+        rows: group.items.flatMap(({ item: it, index }) => {
+          const r = R.items.byItem.find((b) => b.id === it.id);
+          return r ? [[`${index}: all ${it.count} (m²)`, ...r.absorptionM2.map((a) => fixed(a, 2))]] : [];
+        }),
       },
       limits: [
         ...(res?.limits ?? []).map(sentence),
@@ -458,7 +476,7 @@ export function buildReportModel(input: ReportInput): ReportModel {
   const totalMass = rec.analysis.items.every((i) => i.unitMassKg !== null) ? rec.analysis.items.reduce((s, i) => s + (i.unitMassKg ?? 0) * i.count, 0) : null;
   const costs = {
     table: {
-      columns: ["No.", "Item", "Fill material", "Count", "Unit cost", "Mass (kg)", "Cost"],
+      columns: ["No.", "Item", "Fill material", "Count", "Unit cost", "Total mass (kg)", "Cost"],
       numeric: [true, false, false, true, true, true, true],
       rows: [...costRows, ["", "Total", "", String(R.items.count), "", fixed(totalMass, 1), money(R.items.cost)]],
     },

@@ -61,6 +61,15 @@ function Cover({ m }: { m: ReportModel }) {
   );
 }
 
+function Method({ x }: { x: { title: string; text: string } }) {
+  return (
+    <View style={{ marginBottom: 5 }} wrap={false}>
+      <Text style={{ fontWeight: 600 }}>{x.title}</Text>
+      <Text style={{ fontSize: 9.2, lineHeight: 1.42 }}>{x.text}</Text>
+    </View>
+  );
+}
+
 export function ReportDocument({ m }: { m: ReportModel }) {
   let n = 0;
   const next = () => ++n;
@@ -119,7 +128,7 @@ export function ReportDocument({ m }: { m: ReportModel }) {
         </Chapter>
 
         {m.lowFrequency ? (
-          <Chapter n={next()} title="Low-frequency findings" newPage>
+          <Chapter n={next()} title="Low-frequency findings">
             <KeyValues rows={m.lowFrequency.facts} />
             <Bullets items={m.lowFrequency.verdicts} />
             <H2>Mode spectrum</H2>
@@ -147,12 +156,18 @@ export function ReportDocument({ m }: { m: ReportModel }) {
         ) : null}
 
         {m.decay ? (
-          <Chapter n={next()} title="Decay per band" newPage>
-            <Text style={s.p}>{m.decay.verdictLine}</Text>
-            <View wrap={false}>
-              <BandBarsPlot g={m.decay.plot} />
-              <Text style={s.caption}>Reverberation time (Eyring) per octave band before and after, with the target band shaded. Shapes give the verdict: circle within, triangle near, cross outside.</Text>
-            </View>
+          <Chapter
+            n={next()}
+            title="Decay per band"
+            newPage={!m.lowFrequency}
+            lead={
+              <View>
+                <Text style={s.p}>{m.decay.verdictLine}</Text>
+                <BandBarsPlot g={m.decay.plot} />
+                <Text style={s.caption}>Reverberation time (Eyring) per octave band before and after, with the target band shaded. Shapes give the verdict: circle within, triangle near, cross outside.</Text>
+              </View>
+            }
+          >
             <Table t={m.decay.table} widths={[0.9, 1, 1, 1.1, 1, 1.2]} />
             {m.decay.notes.map((t, i) => (
               <Text key={i} style={s.small}>
@@ -171,7 +186,7 @@ export function ReportDocument({ m }: { m: ReportModel }) {
               {m.treatment.builds.map((b) => (
                 <View key={b.index} style={{ marginBottom: 6 }}>
                   <View wrap={false}>
-                    <Text style={s.h3}>{`${b.index}. ${b.name}`}</Text>
+                    <Text style={s.h3}>{b.title}</Text>
                     <Text style={[s.small, { marginBottom: 3 }]}>{b.description}</Text>
                     {b.rating ? (
                       <Text style={{ marginBottom: 3 }}>
@@ -216,12 +231,9 @@ export function ReportDocument({ m }: { m: ReportModel }) {
           <Text style={s.p}>{m.disclaimer}</Text>
         </Chapter>
 
-        <Chapter n={next()} title="Methods and their limits">
-          {m.methods.map((x, i) => (
-            <View key={i} style={{ marginBottom: 5 }} wrap={false}>
-              <Text style={{ fontWeight: 600 }}>{x.title}</Text>
-              <Text style={{ fontSize: 9.2, lineHeight: 1.42 }}>{x.text}</Text>
-            </View>
+        <Chapter n={next()} title="Methods and their limits" lead={<Method x={m.methods[0]!} />}>
+          {m.methods.slice(1).map((x, i) => (
+            <Method key={i} x={x} />
           ))}
           <Text style={s.small}>{`Calculation engine ${m.engineVersion}.`}</Text>
         </Chapter>

@@ -56,13 +56,15 @@ export function Bullets({ items }: { items: string[] }) {
 }
 
 /** A numbered chapter heading that starts a new page when `newPage`. */
-export function Chapter({ n, title, newPage, keepTogether, children }: { n: number; title: string; newPage?: boolean; keepTogether?: boolean; children: ReactNode }) {
+/** `lead` stays on the same page as the heading (e.g. the chapter's main plot). */
+export function Chapter({ n, title, newPage, keepTogether, lead, children }: { n: number; title: string; newPage?: boolean; keepTogether?: boolean; lead?: ReactNode; children: ReactNode }) {
   return (
     <View break={newPage} wrap={!keepTogether}>
-      <View wrap={false} minPresenceAhead={90}>
+      <View wrap={false} minPresenceAhead={220}>
         <Text style={s.h1Number}>{String(n).padStart(2, "0")}</Text>
         <Text style={s.h1}>{title}</Text>
         <View style={s.rule} />
+        {lead}
       </View>
       {children}
     </View>
@@ -71,7 +73,7 @@ export function Chapter({ n, title, newPage, keepTogether, children }: { n: numb
 
 export function H2({ children }: { children: ReactNode }) {
   return (
-    <Text style={s.h2} minPresenceAhead={50}>
+    <Text style={s.h2} minPresenceAhead={110}>
       {children}
     </Text>
   );

@@ -3,6 +3,8 @@ import type { BandBarsGeometry } from "@/lib/plots/band-bars-geometry";
 import type { CartesianFrame } from "@/lib/plots/cartesian-frame";
 import type { FrequencyResponseGeometry } from "@/lib/plots/frequency-response-geometry";
 import type { ModeSpectrumGeometry } from "@/lib/plots/mode-spectrum-geometry";
+import { markerPath } from "@/lib/plots/markers";
+import { INK } from "@/lib/plots/palette";
 import type { PlanGeometry } from "../plan";
 import { SANS } from "./fonts";
 import { C } from "./theme";
@@ -55,7 +57,9 @@ function Frame({ g, children }: { g: CartesianFrame; children: React.ReactNode }
         {legend.items.map((it, i) => (
           <G key={`lg${i}`} transform={`translate(${it.x}, ${it.y})`}>
             {it.kind === "box" ? (
-              <Rect x={0} y={-5} width={26} height={10} fill={it.colour} stroke={C.rule} strokeWidth={0.5} />
+              <Rect x={0} y={-5} width={26} height={10} fill={it.colour} fillOpacity={it.fillOpacity ?? 1} stroke={it.colour} strokeWidth={0.8} strokeDasharray={it.dash || undefined} />
+            ) : it.kind === "marker" && it.marker ? (
+              <Path d={markerPath(it.marker, 8)} transform="translate(13, 0)" fill={it.marker === "cross" || it.marker === "plus" ? "none" : it.colour} stroke={it.colour} strokeWidth={1.2} />
             ) : (
               <Line x1={0} x2={26} y1={0} y2={0} stroke={it.colour} strokeWidth={2} strokeDasharray={it.dash || undefined} />
             )}
@@ -110,11 +114,11 @@ export function BandBarsPlot({ g }: { g: BandBarsGeometry }) {
   return (
     <Svg width={PLOT_PT} height={h} viewBox={`0 0 ${g.width} ${g.height}`}>
       <Frame g={g}>
-        {g.targetArea ? <Path d={g.targetArea} fill={C.accentSoft} fillOpacity={0.55} stroke="none" /> : null}
+        {g.targetArea ? <Path d={g.targetArea} fill={INK.kiln} fillOpacity={0.16} stroke="none" /> : null}
         {g.targetLine ? <Path d={g.targetLine} stroke={C.accent} strokeWidth={1} strokeDasharray="4 3" fill="none" /> : null}
         {g.bars.map((b, i) => (
           <G key={`b${i}`}>
-            <Rect x={b.x} y={b.y} width={b.width} height={b.height} fill={g.styles[b.scenario]!.colour} fillOpacity={b.scenario === 0 ? 0.28 : 0.85} stroke={g.styles[b.scenario]!.colour} strokeWidth={0.8} />
+            <Rect x={b.x} y={b.y} width={b.width} height={b.height} fill={g.styles[b.scenario]!.colour} fillOpacity={0.35} stroke={g.styles[b.scenario]!.colour} strokeWidth={0.8} />
             {b.hatch ? <Path d={b.hatch} stroke={g.styles[b.scenario]!.colour} strokeWidth={0.7} fill="none" /> : null}
           </G>
         ))}
