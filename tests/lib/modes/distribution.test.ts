@@ -117,6 +117,10 @@ describe("modeCountCheck(room, { frequenciesHz, speedOfSound })", () => {
     expect(r.rows.map((x) => x.countedModes)).toEqual([13, 39, 76, 230]);
     expect(r.rows[3]!.asymptoticModes).toBeCloseTo(229.9, 1);
     expect(r.rows[3]!.ratio).toBeCloseTo(230 / r.rows[3]!.asymptoticModes, 12);
+    expect(r.rows[0]!.modalDensityPerHz).toBe(modalDensity({ lengthM: 5, widthM: 4, heightM: 3 }, 100));
+    // dN/df at 300 Hz by hand: 4 pi 60 300^2/343^3 + pi 94 300/(2 343^2) + 48/(8 343) = 1.682 + 0.377 + 0.017
+    // = 2.076 modes per Hz, so one new mode about every 1/2.076 = 0.48 Hz.
+    expect(r.verdict).toContain("every 0.5 Hz");
     expect(typeof r.verdict).toBe("string");
     expect(r.verdict.length).toBeGreaterThan(10);
   });
