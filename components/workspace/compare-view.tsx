@@ -67,7 +67,7 @@ export function CompareView({ roomId, all, initial, initialIds }: { roomId: stri
             <h2 id="cmp-cost" className="text-lg font-semibold">Summary</h2>
             <div className="overflow-x-auto rounded-[10px] border border-paper-line bg-paper-raised">
               <table className="w-full text-sm" data-testid="compare-summary">
-                <thead className="bg-paper-sunk/70 text-left text-xs uppercase tracking-wide text-ink-soft">
+                <thead className="bg-paper-sunk/70 text-left text-xs tracking-wide text-ink-soft">
                   <tr>
                     <th className="px-3 py-2 font-medium">Scenario</th>
                     <th className="px-3 py-2 text-right font-medium">Items</th>
@@ -99,7 +99,7 @@ export function CompareView({ roomId, all, initial, initialIds }: { roomId: stri
           {withReverb.length > 0 && (
             <section aria-labelledby="cmp-rt" className="space-y-2">
               <h2 id="cmp-rt" className="text-lg font-semibold">Reverberation time per band</h2>
-              <Card className="p-4">
+              <Card className="relative overflow-hidden p-4">
                 <BandBarsPlot
                   title="Predicted RT60 per octave band (Eyring)"
                   units="s"
@@ -112,7 +112,7 @@ export function CompareView({ roomId, all, initial, initialIds }: { roomId: stri
               </Card>
               <div className="overflow-x-auto rounded-[10px] border border-paper-line bg-paper-raised">
                 <table className="w-full text-sm" data-testid="compare-rt">
-                  <thead className="bg-paper-sunk/70 text-left text-xs uppercase tracking-wide text-ink-soft">
+                  <thead className="bg-paper-sunk/70 text-left text-xs tracking-wide text-ink-soft">
                     <tr>
                       <th className="px-3 py-2 font-medium">RT60 (s)</th>
                       {bands.map((f) => <th key={f} className="px-3 py-2 text-right font-medium">{fmtHz(f)} Hz</th>)}
@@ -140,7 +140,7 @@ export function CompareView({ roomId, all, initial, initialIds }: { roomId: stri
             {main.every((m) => !m) ? (
               <EmptyState title="No seat response">The room needs a seat and a source that plays the bass (Room tab).</EmptyState>
             ) : (
-              <Card className="p-4">
+              <Card className="relative overflow-hidden p-4">
                 <FrequencyResponsePlot
                   title={`Modal response at ${main.find((m) => m)?.name ?? "the main seat"}`}
                   units="dB (relative)"

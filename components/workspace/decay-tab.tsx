@@ -111,7 +111,7 @@ export function DecayTab({ ws, scenarios, current, units, builds, actions, onSce
             <div className="overflow-x-auto rounded-[10px] border border-paper-line bg-paper-raised">
               <table className="w-full text-sm" data-testid="deviation-table">
                 <caption className="sr-only">Predicted reverberation time per band against the target</caption>
-                <thead className="bg-paper-sunk/70 text-left text-xs uppercase tracking-wide text-ink-soft">
+                <thead className="bg-paper-sunk/70 text-left text-xs tracking-wide text-ink-soft">
                   <tr>
                     <th className="px-3 py-2 font-medium">Band (Hz)</th>
                     {rv.bandsHz.map((f) => (

@@ -61,13 +61,13 @@ export function ItemsPanel({ scenario, results, builds, room, units, editable, a
         <h2 id="items-title" className="text-lg font-semibold">
           Treatment in “{scenario.name}”
         </h2>
-        {editable && editing !== "new" && (
+        {editable && !scenario.isBaseline && editing !== "new" && (
           <Button type="button" variant="secondary" className="no-print" onClick={() => setEditing("new")} disabled={builds.length === 0}>
             <Plus className="h-4 w-4" aria-hidden /> Add from the library
           </Button>
         )}
       </div>
-      {editable && builds.length === 0 && <p className="text-sm text-ink-soft">The library is empty: design a stack on the Absorbers tab and save it, then add it here.</p>}
+      {editable && !scenario.isBaseline && builds.length === 0 && <p className="text-sm text-ink-soft">The library is empty: design a stack on the Absorbers tab and save it, then add it here.</p>}
       {editing === "new" && <ItemForm builds={builds} room={room} units={units} onCancel={() => setEditing(null)} onSave={async (input) => { const r = await actions.addItem(scenario.id, input); if (r.ok) setEditing(null); return r.ok ? undefined : r.message; }} />}
       {items.length === 0 ? (
         <EmptyState title={scenario.isBaseline ? "The baseline is the room as it is" : "No treatment in this scenario yet"}>
@@ -77,7 +77,7 @@ export function ItemsPanel({ scenario, results, builds, room, units, editable, a
         <div className="overflow-x-auto rounded-[10px] border border-paper-line bg-paper-raised">
           <table className="w-full text-sm">
             <caption className="sr-only">Treatment items of {scenario.name}</caption>
-            <thead className="bg-paper-sunk/70 text-left text-xs uppercase tracking-wide text-ink-soft">
+            <thead className="bg-paper-sunk/70 text-left text-xs tracking-wide text-ink-soft">
               <tr>
                 <th className="px-3 py-2 font-medium">Item</th>
                 <th className="px-3 py-2 font-medium">Count</th>

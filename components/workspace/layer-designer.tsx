@@ -146,7 +146,12 @@ export function LayerDesigner({
                   </div>
                   {row.kind === "porous" && (
                     <div className="grid grid-cols-2 gap-2">
-                      <Field id={`${id}-material`} label="Material" className="col-span-2">
+                      <Field
+                        id={`${id}-material`}
+                        label="Material"
+                        className="col-span-2"
+                        hint={porousMaterial(row.materialId) ? `Typical σ ${porousMaterial(row.materialId)!.flowResistivity.typical.toLocaleString("en-GB")} Pa·s/m² (usual ${porousMaterial(row.materialId)!.flowResistivity.min.toLocaleString("en-GB")}–${porousMaterial(row.materialId)!.flowResistivity.max.toLocaleString("en-GB")}); use a measured value where you have one.` : "Type the airflow resistivity of your material (ISO 9053)."}
+                      >
                         <Select
                           id={`${id}-material`}
                           {...register(`layers.${i}.materialId`, {
@@ -158,7 +163,7 @@ export function LayerDesigner({
                         >
                           {POROUS_MATERIALS.map((m) => (
                             <option key={m.id} value={m.id}>
-                              {m.name} · σ ≈ {m.flowResistivity.typical.toLocaleString("en-GB")}
+                              {m.name}
                             </option>
                           ))}
                           <option value="">Other — σ typed in</option>
@@ -292,7 +297,7 @@ function RatingCard({ result, units }: { result: Extract<ReturnType<typeof desig
           ["Total depth", depth],
         ].map(([k, v]) => (
           <div key={k}>
-            <dt className="text-xs uppercase tracking-wide text-ink-faint">{k}</dt>
+            <dt className="text-xs tracking-wide text-ink-faint">{k}</dt>
             <dd className="text-lg tabular-nums">{v}</dd>
           </div>
         ))}

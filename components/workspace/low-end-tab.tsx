@@ -143,7 +143,7 @@ export function LowEndTab({
                 <caption className="pb-1 text-left text-xs text-ink-soft">
                   Spread of the level over {lf.spreadBandHz.lowHz}–{lf.spreadBandHz.highHz} Hz (standard deviation; lower is more even)
                 </caption>
-                <thead className="text-left text-xs uppercase tracking-wide text-ink-soft">
+                <thead className="text-left text-xs tracking-wide text-ink-soft">
                   <tr>
                     <th className="pr-6 font-medium">Seat</th>
                     <th className="font-medium">Spread (dB)</th>

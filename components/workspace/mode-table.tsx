@@ -111,7 +111,7 @@ export function ModeTable({ modes }: { modes: ScenarioResults["modes"] }) {
       <div className="max-h-[28rem] overflow-auto rounded-[10px] border border-paper-line bg-paper-raised print:max-h-none">
         <table className="w-full border-collapse text-sm">
           <caption className="sr-only">Room modes, sortable; coincidences and wide gaps flagged</caption>
-          <thead className="sticky top-0 bg-paper-sunk text-left text-xs uppercase tracking-wide text-ink-soft">
+          <thead className="sticky top-0 bg-paper-sunk text-left text-xs tracking-wide text-ink-soft">
             {table.getHeaderGroups().map((g) => (
               <tr key={g.id}>
                 {g.headers.map((h) => {
@@ -119,7 +119,7 @@ export function ModeTable({ modes }: { modes: ScenarioResults["modes"] }) {
                   return (
                     <th key={h.id} scope="col" aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : undefined} className="px-3 py-2 font-medium">
                       {h.column.getCanSort() ? (
-                        <button type="button" onClick={h.column.getToggleSortingHandler()} className="inline-flex items-center gap-1 uppercase hover:text-ink">
+                        <button type="button" onClick={h.column.getToggleSortingHandler()} className="inline-flex items-center gap-1 hover:text-ink">
                           <table.FlexRender header={h} />
                           {sorted === "asc" ? <ArrowUp className="h-3 w-3" aria-hidden /> : sorted === "desc" ? <ArrowDown className="h-3 w-3" aria-hidden /> : <ArrowUpDown className="h-3 w-3 opacity-40" aria-hidden />}
                         </button>

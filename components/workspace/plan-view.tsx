@@ -163,16 +163,16 @@ export function PlanView({
       <line x1={sx(0)} x2={sx(0)} y1={sy(0)} y2={sy(W)} className="stroke-kiln-600" strokeWidth={6} />
       <g className="fill-ink-soft text-[12px]" aria-hidden="true">
         <text transform={`translate(${PAD.left - 12} ${PAD.top + h / 2}) rotate(-90)`} textAnchor="middle" className="fill-kiln-700 font-semibold">
-          Front wall
+          Front wall · width {formatLength(W, units)}
         </text>
         <text transform={`translate(${PAD.left + w + 16} ${PAD.top + h / 2}) rotate(90)`} textAnchor="middle">
           Rear wall
         </text>
         <text x={PAD.left + w / 2} y={PAD.top - 10} textAnchor="middle">
-          Right wall · length {formatLength(L, units)}
+          Right wall
         </text>
         <text x={PAD.left + w / 2} y={PAD.top + h + 22} textAnchor="middle">
-          Left wall · width {formatLength(W, units)} (front to back: x; left to right: y)
+          Left wall · length {formatLength(L, units)}
         </text>
       </g>
       {positions.map((p) => {

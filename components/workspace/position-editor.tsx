@@ -69,7 +69,7 @@ export function PositionPanel({
       {editable && (
         <div className="no-print flex flex-wrap gap-2">
           {(["seat", "main-speaker", "subwoofer"] as const).map((k) => (
-            <Button key={k} type="button" variant="secondary" onClick={() => onAdd(k)} disabled={k === "seat" ? positions.filter((p) => p.kind === "seat").length >= POSITION_LIMITS.maxSeats : positions.filter((p) => p.kind !== "seat").length >= POSITION_LIMITS.maxSources}>
+            <Button key={k} type="button" variant="secondary" className="px-2.5 py-1.5" onClick={() => onAdd(k)} disabled={k === "seat" ? positions.filter((p) => p.kind === "seat").length >= POSITION_LIMITS.maxSeats : positions.filter((p) => p.kind !== "seat").length >= POSITION_LIMITS.maxSources}>
               <Plus className="h-4 w-4" aria-hidden /> {KIND_LABEL[k].toLowerCase() === "seat" ? "Seat" : KIND_LABEL[k]}
             </Button>
           ))}
@@ -135,7 +135,7 @@ function PositionForm({ position, units, room, editable, onSave, onDelete }: { p
         <Field id={`${id}-name`} label="Name">
           <Input id={`${id}-name`} value={d.name} disabled={!editable} onChange={(e) => set("name", e.target.value)} />
         </Field>
-        <div className="grid gap-3 sm:grid-cols-3 lg:grid-cols-1 xl:grid-cols-3">
+        <div className="grid gap-3 sm:grid-cols-3 lg:grid-cols-1">
           <Field id={`${id}-x`} label="From the front wall (x)">
             <LengthInput id={`${id}-x`} label="From the front wall" units={units} value={d.xM} invalid={bad(d.xM, room.lengthM)} onChange={(v) => set("xM", v)} />
           </Field>

@@ -35,11 +35,11 @@ export function RoomTab({ ws, positions, units, actions, onMove }: { ws: Workspa
     <div className="space-y-5">
       <Card>
         <div className="flex flex-wrap items-start justify-between gap-4">
-          <dl className="grid flex-1 grid-cols-2 gap-x-6 gap-y-3 sm:grid-cols-3 lg:grid-cols-6">
+          <dl className="grid flex-1 grid-cols-2 gap-x-6 gap-y-3 sm:grid-cols-3 xl:grid-cols-6">
             {facts.map(([k, v]) => (
               <div key={k}>
                 <dt className="text-xs uppercase tracking-wide text-ink-faint">{k}</dt>
-                <dd className="text-lg tabular-nums">{v}</dd>
+                <dd className="whitespace-nowrap text-lg tabular-nums">{v}</dd>
               </div>
             ))}
           </dl>

@@ -33,16 +33,26 @@ export function useFlatnessMap(input: FlatnessJobInput | null, key: string) {
       const id = ++run.current;
       const w = new Worker(new URL("../../lib/workers/flatness.worker.ts", import.meta.url), { type: "module" });
       worker.current = w;
+      // a worker that cannot load or throws outside a call never answers comlink: say so
+      w.onerror = (ev) => {
+        if (run.current !== id) return;
+        ev.preventDefault?.();
+        setState({ status: "error", message: ev.message || "the computation could not start in this browser" });
+        w.terminate();
+      };
       const api: Remote<FlatnessWorkerApi> = wrap<FlatnessWorkerApi>(w);
       setState({ status: "running", progress: 0 });
+      // progress arrives on its own message port and can land after the result: ignore it then
+      let finished = false;
       api
         .run(
           job,
           proxy((f: number) => {
-            if (run.current === id) setState({ status: "running", progress: f });
+            if (run.current === id && !finished) setState({ status: "running", progress: f });
           }),
         )
         .then((result) => {
+          finished = true;
           if (run.current !== id) return;
           last.current = result;
           setState({ status: "done", result });
@@ -50,6 +60,7 @@ export function useFlatnessMap(input: FlatnessJobInput | null, key: string) {
           if (worker.current === w) worker.current = null;
         })
         .catch((e: unknown) => {
+          finished = true;
           if (run.current !== id) return;
           setState({ status: "error", message: e instanceof Error ? e.message : String(e) });
           w.terminate();

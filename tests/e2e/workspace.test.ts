@@ -27,12 +27,31 @@ afterAll(async () => {
   await closeTestDb();
 });
 
+/** Browser errors of a page, printed (a failing worker or script shows up here). */
+function watchErrors(page: Page, label: string) {
+  page.on("console", (m) => m.type() === "error" && console.log(`[${label} console] ${m.text()}`));
+  page.on("pageerror", (e) => console.log(`[${label} pageerror] ${e.message}`));
+  page.on("requestfailed", (r) => !r.url().includes("_rsc=") && r.failure()?.errorText !== "net::ERR_ABORTED" && console.log(`[${label} requestfailed] ${r.url()} ${r.failure()?.errorText ?? ""}`));
+}
+
+/** A close-up PNG of one panel, beside the full-page screenshots. */
+async function closeUp(page: Page, selector: string, name: string) {
+  fs.mkdirSync(SCREENSHOT_DIR, { recursive: true });
+  await page.locator(selector).first().screenshot({ path: path.join(SCREENSHOT_DIR, `${name}.png`) });
+}
+
 const tab = (page: Page, name: string) => page.getByRole("navigation", { name: "Room sections" }).getByRole("link", { name, exact: true });
 
 /** The text of the evenness-map summary once a map has finished. */
 async function mapSummary(page: Page): Promise<string> {
   const loc = page.getByTestId("flatness-summary");
-  await loc.waitFor({ timeout: 30_000 });
+  try {
+    await loc.waitFor({ timeout: 30_000 });
+  } catch (e) {
+    await screenshot(page, "flatness-timeout");
+    const status = await page.locator("#flatness-title").locator("xpath=../..").innerText().catch(() => "");
+    throw new Error(`the evenness map did not finish; the panel says: ${status.slice(0, 400)}`, { cause: e });
+  }
   return loc.innerText();
 }
 
@@ -41,7 +60,12 @@ async function seatSpreads(page: Page): Promise<string> {
 }
 
 async function drag(page: Page, selector: string, dx: number, dy: number) {
-  const box = await page.locator(selector).first().boundingBox();
+  // the marker's own hit circle (the group's box also holds its label), scrolled into the viewport:
+  // mouse coordinates outside the viewport reach nothing
+  const hit = page.locator(`${selector} > circle`).first();
+  await hit.scrollIntoViewIfNeeded();
+  await page.evaluate(() => window.scrollBy(0, 200));
+  const box = await hit.boundingBox();
   if (!box) throw new Error(`${selector} is not on screen`);
   const x = box.x + box.width / 2, y = box.y + box.height / 2;
   await page.mouse.move(x, y);
@@ -54,6 +78,7 @@ describe("the demo media room opens on every tab", () => {
   it("shows the plan, the low end, the absorbers and the decay, each timed", async () => {
     const { context, page } = await newSession(browser);
     try {
+      watchErrors(page, "demo");
       await signIn(page, engineer.email, engineer.password);
       const room = await testDb().selectFrom("rooms").select("id").where("name", "=", "Media room").executeTakeFirstOrThrow();
       const checks: [string, string, () => Promise<unknown>][] = [
@@ -82,6 +107,8 @@ describe("the demo media room opens on every tab", () => {
       expect(axialRows).toBeLessThan(rowsAll);
       expect(await page.locator("table", { hasText: "Order nx ny nz" }).locator("tbody").innerText()).not.toMatch(/tangential|oblique/);
       await screenshot(page, "demo-low-end-axial-only");
+      await closeUp(page, 'section[aria-labelledby="flatness-title"]', "closeup-evenness-map");
+      await closeUp(page, 'section[aria-labelledby="seat-response-title"]', "closeup-seat-responses");
 
       const t0 = Date.now();
       await page.goto(appUrl(`/rooms/${room.id}/compare`));
@@ -99,6 +126,7 @@ describe("an engineer's new room, end to end", () => {
   it("creates a room in feet and inches, places seats and a subwoofer, drags it, treats the room and compares", async () => {
     const { context, page } = await newSession(browser);
     try {
+      watchErrors(page, "new room");
       await signIn(page, engineer.email, engineer.password);
       const project = await testDb().selectFrom("projects").select("id").where("name", "=", "Hollis media room").executeTakeFirstOrThrow();
       await page.goto(appUrl(`/projects/${project.id}/rooms/new`));
@@ -115,6 +143,10 @@ describe("an engineer's new room, end to end", () => {
       const roomId = new URL(page.url()).pathname.split("/")[2]!;
       const room = await testDb().selectFrom("rooms").selectAll().where("id", "=", roomId).executeTakeFirstOrThrow();
       expect(room.length_m).toBeCloseTo(18 * 0.3048 + 6 * 0.0254, 6);
+
+      // this engineer works in feet and inches from here on
+      await page.getByRole("group", { name: "Units" }).getByRole("button", { name: "ft·in" }).click();
+      await expect.poll(() => page.getByRole("heading", { level: 1 }).locator("xpath=..").innerText(), { timeout: 10_000 }).toContain("18′ 6″ × 13′ 2″ × 8′ 4″");
 
       // an empty room says how to add a seat
       await expect.poll(() => page.getByText("No seats yet.").count()).toBe(1);
@@ -135,7 +167,7 @@ describe("an engineer's new room, end to end", () => {
       await page.locator(`g[data-position-id="${seat2.id}"]`).focus();
       await page.keyboard.press("ArrowRight");
       await page.keyboard.press("ArrowRight");
-      await expect.poll(async () => (await positions()).find((p) => p.id === seat2.id)!.x_m, { timeout: 10_000 }).toBeCloseTo(seat2.x_m + 2 * 0.0508, 3);
+      await expect.poll(async () => (await positions()).find((p) => p.id === seat2.id)!.x_m, { timeout: 10_000 }).toBeCloseTo(seat2.x_m + 2 * 0.0508, 2);
       await screenshot(page, "new-room-placed");
 
       // low end: the map and the seat responses, then drag the subwoofer on the map
@@ -164,6 +196,7 @@ describe("an engineer's new room, end to end", () => {
       await page.getByRole("button", { name: "Save build" }).click();
       await expect.poll(() => page.getByText("is in the library").count(), { timeout: 10_000 }).toBe(1);
       await screenshot(page, "new-room-absorbers");
+      await closeUp(page, 'form[aria-label="Layer designer"]', "closeup-layer-stack");
       expect(await testDb().selectFrom("builds").select("id").where("name", "=", "Den rear panel, 4 in wool").executeTakeFirst()).toBeTruthy();
 
       // decay: a treated scenario from the baseline, with six of the new panels on the rear wall
@@ -183,6 +216,8 @@ describe("an engineer's new room, end to end", () => {
       await expect.poll(() => page.getByRole("cell", { name: "510.00" }).count(), { timeout: 10_000 }).toBeGreaterThan(0);
       await expect.poll(() => page.getByTestId("deviation-table").locator("tr", { hasText: "Predicted (s)" }).innerText(), { timeout: 10_000 }).not.toBe(baselineRow);
       await screenshot(page, "new-room-decay-treated");
+      await closeUp(page, 'section[aria-labelledby="deviation-title"]', "closeup-deviation");
+      await closeUp(page, 'section[aria-labelledby="items-title"]', "closeup-items");
 
       // compare with the baseline
       await page.getByRole("link", { name: "Compare scenarios" }).click();
