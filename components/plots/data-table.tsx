@@ -8,8 +8,11 @@ const cell = (c: PlotCell) => (c === null ? "–" : typeof c === "number" ? form
 /** The data behind a plot as a visually hidden table (screen readers; the plot itself is role="img"). */
 export function DataTable({ title, table }: { title: string; table: PlotTable }) {
   const rows = table.rows.slice(0, MAX_ROWS);
+  // The wrapper carries sr-only: a <table> ignores the 1 px box and, absolutely positioned at its
+  // full height, would stretch the page below the plot.
   return (
-    <table className="sr-only">
+    <div className="sr-only">
+    <table>
       <caption>Data of {title}</caption>
       <thead>
         <tr>
@@ -35,5 +38,6 @@ export function DataTable({ title, table }: { title: string; table: PlotTable })
         )}
       </tbody>
     </table>
+    </div>
   );
 }
