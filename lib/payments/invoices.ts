@@ -117,7 +117,11 @@ export async function startCheckout(db: Kysely<Database>, provider: PaymentProvi
     if (existing.status === "complete") throw conflict("This invoice has just been paid; the confirmation is on its way. Reload in a moment.");
   }
   const back = `${appUrl.replace(/\/+$/, "")}/projects/${invoice.projectId}`;
-  const attempt = invoice.checkoutSessionId ? `:${invoice.checkoutSessionId}` : "";
+  // One key per attempt: the same click twice (or the SDK's retry) gets the same session, but after a
+  // session expired — its id cleared by the webhook, or still stored — the key must be new, or the
+  // provider would answer the old (expired) session again for as long as it remembers the key.
+  const { rows } = await sql<{ n: number }>`select count(*)::int as n from payment_events where invoice_id = ${invoice.id} and outcome = 'session-expired'`.execute(db);
+  const attempt = `:${rows[0]?.n ?? 0}${invoice.checkoutSessionId ? `:${invoice.checkoutSessionId}` : ""}`;
   const session = await provider.createCheckoutSession({
     invoiceId: invoice.id,
     description: invoice.description,

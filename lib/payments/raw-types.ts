@@ -1,29 +1,12 @@
-// The payment provider's wire format (its REST API and webhook events), kept apart from our domain
-// types in types.ts. Only the fields we read are listed.
+// The payment provider's wire format, as its official SDK (`stripe`) types it, kept apart from our
+// domain types in types.ts: only reshape.ts and stripe-provider.ts read these shapes.
+import type Stripe from "stripe";
 
-export interface RawCheckoutSession {
-  id: string;
-  object: "checkout.session";
-  url: string | null;
-  status: "open" | "complete" | "expired" | null;
-  payment_status: "paid" | "unpaid" | "no_payment_required";
-  amount_total: number | null;
-  currency: string | null;
-  client_reference_id: string | null;
-  metadata: Record<string, string> | null;
-  created: number;
-  expires_at?: number;
-}
+/** A checkout session as the provider's API answers it. */
+export type RawCheckoutSession = Stripe.Checkout.Session;
 
-export interface RawEvent {
-  id: string;
-  object: "event";
-  type: string;
-  created: number;
-  livemode: boolean;
-  data: { object: Record<string, unknown> };
-}
+/** A webhook event as `stripe.webhooks.constructEvent` returns it after checking its signature. */
+export type RawEvent = Stripe.Event;
 
-export interface RawApiError {
-  error: { type?: string; code?: string; message?: string; param?: string };
-}
+/** What the SDK sends to create a checkout session. */
+export type RawCheckoutSessionCreateParams = Stripe.Checkout.SessionCreateParams;

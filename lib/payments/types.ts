@@ -30,7 +30,7 @@ export interface NewCheckout {
   idempotencyKey: string;
 }
 
-/** What the app needs from the payment provider; http-provider.ts implements it over its REST API. */
+/** What the app needs from the payment provider; stripe-provider.ts implements it with the official SDK. */
 export interface PaymentProvider {
   createCheckoutSession(input: NewCheckout): Promise<CheckoutSession>;
   retrieveCheckoutSession(id: string): Promise<CheckoutSession>;

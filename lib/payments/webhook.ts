@@ -2,9 +2,8 @@ import "server-only";
 import type { Kysely } from "kysely";
 import { clearCheckoutSession, lockInvoiceForSession, markInvoicePaid, recordPaymentEvent, setPaymentEventOutcome } from "@/db/queries/invoices";
 import type { Database } from "@/db/schema";
-import type { RawEvent } from "./raw-types";
 import { reshapeEvent } from "./reshape";
-import { verifyWebhookSignature, WebhookSignatureError } from "./signature";
+import { verifyPaymentEvent } from "./verify-event";
 
 export type WebhookOutcome =
   | "marked-paid"
@@ -20,24 +19,15 @@ export type WebhookOutcome =
 export type WebhookResult = { ok: true; eventId: string; outcome: WebhookOutcome } | { ok: false; status: 400; message: string };
 
 /**
- * Handles one webhook delivery: the signature is checked against the raw body first (400 when it
- * does not match — nothing is read from an unsigned body); each event id is recorded once, so a
- * replayed delivery changes nothing; a paid checkout marks its open invoice paid when amount and
- * currency match the invoice.
+ * Handles one webhook delivery: the signature is checked against the raw body first, by the
+ * provider's SDK (400 when it does not match — nothing is read from an unsigned body); each event
+ * id is recorded once, so a replayed delivery changes nothing; a paid checkout marks its open
+ * invoice paid when amount and currency match the invoice.
  */
 export async function handlePaymentWebhook(db: Kysely<Database>, payload: string, signature: string | null, secret: string): Promise<WebhookResult> {
-  try {
-    verifyWebhookSignature(payload, signature, secret);
-  } catch (error) {
-    if (error instanceof WebhookSignatureError) return { ok: false, status: 400, message: `Webhook refused: ${error.message}` };
-    throw error;
-  }
-  let raw: RawEvent;
-  try {
-    raw = JSON.parse(payload) as RawEvent;
-  } catch {
-    return { ok: false, status: 400, message: "Webhook refused: the body is not JSON." };
-  }
+  const verified = verifyPaymentEvent(payload, signature, secret);
+  if (!verified.ok) return { ok: false, status: 400, message: `Webhook refused: ${verified.reason}` };
+  const raw = verified.event;
   if (typeof raw?.id !== "string" || typeof raw.type !== "string") return { ok: false, status: 400, message: "Webhook refused: not an event." };
   const event = reshapeEvent(raw);
 

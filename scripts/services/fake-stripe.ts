@@ -1,12 +1,16 @@
 // A small local stand-in for the payment provider's API, for development and tests (loopback only).
-// It answers the calls the app makes — create and retrieve a checkout session, expire one — with the
-// provider's JSON shapes, serves a hosted checkout page of its own at /pay/<id> whose "Pay" button
-// marks the session paid, and then delivers a `checkout.session.completed` event to the app's webhook
-// URL, signed as the provider signs: header `Stripe-Signature: t=<unix s>,v1=<hex HMAC-SHA256 of
-// "<t>.<body>" with the webhook secret>`. State lives in memory; nothing is charged, ever.
-import { createHmac, randomBytes } from "node:crypto";
+// It answers exactly the calls the app's SDK client makes (lib/payments/stripe-provider.ts: the
+// official `stripe` package pointed here with host/port/protocol) — POST /v1/checkout/sessions
+// (form-encoded, with an Idempotency-Key), GET /v1/checkout/sessions/<id>, and for tests
+// POST /v1/checkout/sessions/<id>/expire and GET /v1/events/<id> — with objects of the SDK's own
+// types. It serves a hosted checkout page of its own at /pay/<id> whose "Pay" button marks the
+// session paid and then POSTs a `checkout.session.completed` event to the app's webhook URL, signed
+// by the SDK's own signer (`stripe.webhooks.generateTestHeaderString`). State lives in memory;
+// nothing is charged, ever.
+import { createHash, randomBytes } from "node:crypto";
 import { createServer, type IncomingMessage, type ServerResponse } from "node:http";
 import type { AddressInfo } from "node:net";
+import Stripe from "stripe";
 
 export interface FakeStripeOptions {
   /** 0 = any free port. */
@@ -21,24 +25,32 @@ export interface FakeStripeOptions {
   log?: (line: string) => void;
 }
 
-export interface FakeCheckoutSession {
-  id: string;
-  object: "checkout.session";
-  url: string | null;
-  status: "open" | "complete" | "expired";
-  payment_status: "paid" | "unpaid";
-  mode: "payment";
-  amount_total: number;
-  currency: string;
-  client_reference_id: string | null;
-  customer_email: string | null;
-  metadata: Record<string, string>;
-  success_url: string;
-  cancel_url: string | null;
-  line_items_summary: { name: string; quantity: number; unit_amount: number }[];
-  created: number;
-  expires_at: number;
-  livemode: false;
+/** The session fields the fake fills, typed by the SDK (so what it answers is what the SDK reads). */
+export type FakeCheckoutSession = Pick<
+  Stripe.Checkout.Session,
+  | "id"
+  | "object"
+  | "url"
+  | "status"
+  | "payment_status"
+  | "mode"
+  | "amount_subtotal"
+  | "amount_total"
+  | "currency"
+  | "client_reference_id"
+  | "customer_email"
+  | "metadata"
+  | "success_url"
+  | "cancel_url"
+  | "created"
+  | "expires_at"
+  | "livemode"
+>;
+
+interface LineItem {
+  name: string;
+  quantity: number;
+  unitAmount: number;
 }
 
 export interface FakeDelivery {
@@ -51,7 +63,7 @@ export interface FakeDelivery {
 
 export interface FakeStripeHandle {
   port: number;
-  /** http://127.0.0.1:<port> — the STRIPE_API_URL to give the app. */
+  /** http://127.0.0.1:<port> — the STRIPE_API_URL to give the app (its SDK client derives host, port and protocol). */
   apiUrl: string;
   sessions: Map<string, FakeCheckoutSession>;
   deliveries: FakeDelivery[];
@@ -60,6 +72,8 @@ export interface FakeStripeHandle {
   pay(sessionId: string): Promise<FakeDelivery>;
   /** Delivers an event again, as the provider retries: same event and body, fresh timestamp and signature. */
   redeliver(eventId: string): Promise<FakeDelivery>;
+  /** Expires an open session (as the provider does after 24 h) and delivers `checkout.session.expired`. */
+  expire(sessionId: string): Promise<FakeDelivery>;
   stop(): Promise<void>;
 }
 
@@ -90,7 +104,8 @@ function sendJson(res: ServerResponse, status: number, body: unknown): void {
   res.end(JSON.stringify(body));
 }
 
-const apiError = (res: ServerResponse, status: number, message: string, extra: Record<string, string> = {}) => sendJson(res, status, { error: { type: "invalid_request_error", message, ...extra } });
+/** The provider's error body; the SDK turns it into its StripeError subclasses by `type` and status. */
+const apiError = (res: ServerResponse, status: number, message: string, extra: Record<string, string> = {}, type = "invalid_request_error") => sendJson(res, status, { error: { type, message, ...extra } });
 
 async function readBody(req: IncomingMessage): Promise<string> {
   const chunks: Buffer[] = [];
@@ -103,9 +118,9 @@ async function readBody(req: IncomingMessage): Promise<string> {
   return Buffer.concat(chunks).toString("utf8");
 }
 
-function checkoutPage(s: FakeCheckoutSession): string {
-  const amount = new Intl.NumberFormat("en-GB", { style: "currency", currency: s.currency.toUpperCase() }).format(s.amount_total / 100);
-  const items = s.line_items_summary.map((l) => `<li>${html(l.name)}${l.quantity > 1 ? ` × ${l.quantity}` : ""}</li>`).join("");
+function checkoutPage(s: FakeCheckoutSession, lines: LineItem[]): string {
+  const amount = new Intl.NumberFormat("en-GB", { style: "currency", currency: (s.currency ?? "eur").toUpperCase() }).format((s.amount_total ?? 0) / 100);
+  const items = lines.map((l) => `<li>${html(l.name)}${l.quantity > 1 ? ` × ${l.quantity}` : ""}</li>`).join("");
   const state =
     s.status === "open"
       ? `<form method="post" action="/pay/${html(s.id)}"><button type="submit">Pay ${html(amount)}</button></form>${s.cancel_url ? `<p><a href="${html(s.cancel_url)}">Cancel and go back</a></p>` : ""}`
@@ -128,15 +143,17 @@ export async function startFakeStripe(opts: FakeStripeOptions): Promise<FakeStri
   let webhookUrl = opts.webhookUrl;
   let base = "";
   const sessions = new Map<string, FakeCheckoutSession>();
-  const byIdempotencyKey = new Map<string, string>();
+  const lineItems = new Map<string, LineItem[]>();
+  // Idempotency-Key → the session it made and a hash of the parameters it was first sent with.
+  const byIdempotencyKey = new Map<string, { sessionId: string; paramsHash: string }>();
   const events = new Map<string, { type: string; payload: string }>();
   const deliveries: FakeDelivery[] = [];
 
   async function deliver(eventId: string): Promise<FakeDelivery> {
     const event = events.get(eventId);
     if (!event) throw new RangeError(`no event ${eventId}`);
-    const t = Math.floor(Date.now() / 1000);
-    const signature = `t=${t},v1=${createHmac("sha256", opts.webhookSecret).update(`${t}.${event.payload}`, "utf8").digest("hex")}`;
+    // The SDK's own signer: `t=<unix s>,v1=<HMAC-SHA256 of "<t>.<body>">`, fresh timestamp each delivery.
+    const signature = Stripe.webhooks.generateTestHeaderString({ payload: event.payload, secret: opts.webhookSecret });
     let status: number | "failed" = "failed";
     if (webhookUrl) {
       try {
@@ -153,9 +170,20 @@ export async function startFakeStripe(opts: FakeStripeOptions): Promise<FakeStri
     return delivery;
   }
 
-  function emit(type: string, object: unknown): string {
+  function emit(type: "checkout.session.completed" | "checkout.session.expired", object: FakeCheckoutSession): string {
     const eventId = id("evt");
-    const payload = JSON.stringify({ id: eventId, object: "event", api_version: "2026-01-01", created: Math.floor(Date.now() / 1000), livemode: false, pending_webhooks: 1, type, data: { object } }, null, 2);
+    const event = {
+      id: eventId,
+      object: "event",
+      api_version: Stripe.API_VERSION,
+      created: Math.floor(Date.now() / 1000),
+      livemode: false,
+      pending_webhooks: 1,
+      request: { id: null, idempotency_key: null },
+      type,
+      data: { object: { ...object, metadata: { ...object.metadata } } },
+    };
+    const payload = JSON.stringify(event, null, 2);
     events.set(eventId, { type, payload });
     return eventId;
   }
@@ -170,44 +198,60 @@ export async function startFakeStripe(opts: FakeStripeOptions): Promise<FakeStri
     return deliver(emit("checkout.session.completed", s));
   }
 
-  function createSession(form: Record<string, unknown>): FakeCheckoutSession | string {
-    if (form.mode !== "payment") return "mode must be payment";
-    if (typeof form.success_url !== "string" || !/^https?:\/\//.test(form.success_url)) return "success_url must be an absolute URL";
+  async function expire(sessionId: string): Promise<FakeDelivery> {
+    const s = sessions.get(sessionId);
+    if (!s) throw new RangeError(`no checkout session ${sessionId}`);
+    if (s.status !== "open") throw new RangeError(`checkout session ${sessionId} is ${s.status}`);
+    s.status = "expired";
+    s.url = null;
+    return deliver(emit("checkout.session.expired", s));
+  }
+
+  function createSession(form: Record<string, unknown>): { session: FakeCheckoutSession; lines: LineItem[] } | { param: string; message: string } {
+    if (form.mode !== "payment") return { param: "mode", message: "mode must be payment" };
+    if (typeof form.success_url !== "string" || !/^https?:\/\//.test(form.success_url)) return { param: "success_url", message: "success_url must be an absolute URL" };
+    if (form.cancel_url !== undefined && (typeof form.cancel_url !== "string" || !/^https?:\/\//.test(form.cancel_url))) return { param: "cancel_url", message: "cancel_url must be an absolute URL" };
     const items = listOf(form.line_items);
-    if (items.length === 0) return "line_items must have at least one item";
-    const summary: FakeCheckoutSession["line_items_summary"] = [];
+    if (items.length === 0) return { param: "line_items", message: "line_items must have at least one item" };
+    const lines: LineItem[] = [];
     let currency = "";
-    for (const item of items) {
+    for (const [i, item] of items.entries()) {
       const price = item.price_data as Record<string, unknown> | undefined;
-      const unit = Number(price?.unit_amount);
+      const unitAmount = Number(price?.unit_amount);
       const quantity = Number(item.quantity ?? 1);
       const cur = String(price?.currency ?? "");
-      if (!price || !Number.isInteger(unit) || unit < 0) return "line_items[].price_data.unit_amount must be a non-negative integer";
-      if (!/^[a-z]{3}$/.test(cur)) return "line_items[].price_data.currency must be a lower-case ISO currency code";
-      if (currency && cur !== currency) return "all line items must share one currency";
+      if (!price || !/^\d+$/.test(String(price.unit_amount))) return { param: `line_items[${i}][price_data][unit_amount]`, message: "unit_amount must be a non-negative integer" };
+      if (!Number.isInteger(quantity) || quantity < 1) return { param: `line_items[${i}][quantity]`, message: "quantity must be a positive integer" };
+      if (!/^[a-z]{3}$/.test(cur)) return { param: `line_items[${i}][price_data][currency]`, message: "currency must be a lower-case ISO currency code" };
+      if (currency && cur !== currency) return { param: `line_items[${i}][price_data][currency]`, message: "all line items must share one currency" };
       currency = cur;
-      summary.push({ name: String((price.product_data as Record<string, unknown> | undefined)?.name ?? "Item"), quantity, unit_amount: unit });
+      lines.push({ name: String((price.product_data as Record<string, unknown> | undefined)?.name ?? "Item"), quantity, unitAmount });
     }
     const created = Math.floor(Date.now() / 1000);
     const sid = id("cs");
+    const total = lines.reduce((a, l) => a + l.unitAmount * l.quantity, 0);
+    const metadata = Object.fromEntries(Object.entries((form.metadata as Record<string, unknown> | undefined) ?? {}).map(([k, v]) => [k, String(v)]));
     return {
-      id: sid,
-      object: "checkout.session",
-      url: `${base}/pay/${sid}`,
-      status: "open",
-      payment_status: "unpaid",
-      mode: "payment",
-      amount_total: summary.reduce((a, l) => a + l.unit_amount * l.quantity, 0),
-      currency,
-      client_reference_id: typeof form.client_reference_id === "string" ? form.client_reference_id : null,
-      customer_email: typeof form.customer_email === "string" ? form.customer_email : null,
-      metadata: Object.fromEntries(Object.entries((form.metadata as Record<string, string> | undefined) ?? {}).map(([k, v]) => [k, String(v)])),
-      success_url: form.success_url,
-      cancel_url: typeof form.cancel_url === "string" ? form.cancel_url : null,
-      line_items_summary: summary,
-      created,
-      expires_at: created + 24 * 3600,
-      livemode: false,
+      lines,
+      session: {
+        id: sid,
+        object: "checkout.session",
+        url: `${base}/pay/${sid}`,
+        status: "open",
+        payment_status: "unpaid",
+        mode: "payment",
+        amount_subtotal: total,
+        amount_total: total,
+        currency,
+        client_reference_id: typeof form.client_reference_id === "string" ? form.client_reference_id : null,
+        customer_email: typeof form.customer_email === "string" ? form.customer_email : null,
+        metadata,
+        success_url: form.success_url,
+        cancel_url: typeof form.cancel_url === "string" ? form.cancel_url : null,
+        created,
+        expires_at: created + 24 * 3600,
+        livemode: false,
+      },
     };
   }
 
@@ -224,12 +268,12 @@ export async function startFakeStripe(opts: FakeStripeOptions): Promise<FakeStri
       }
       if (method === "GET") {
         res.writeHead(200, { "content-type": "text/html; charset=utf-8" });
-        res.end(checkoutPage(s));
+        res.end(checkoutPage(s, lineItems.get(s.id) ?? []));
         return;
       }
       if (method === "POST") {
         if (s.status === "open") await pay(s.id);
-        res.writeHead(303, { location: s.success_url.replace("{CHECKOUT_SESSION_ID}", s.id) });
+        res.writeHead(303, { location: (s.success_url ?? "/").replace("{CHECKOUT_SESSION_ID}", s.id) });
         res.end();
         return;
       }
@@ -239,29 +283,36 @@ export async function startFakeStripe(opts: FakeStripeOptions): Promise<FakeStri
       res.end("Not found.");
       return;
     }
-    if (req.headers.authorization !== `Bearer ${opts.secretKey}`) return apiError(res, 401, "Invalid API Key provided.");
+    if (req.headers.authorization !== `Bearer ${opts.secretKey}`) return apiError(res, 401, "Invalid API Key provided.", {}, "invalid_request_error");
     const body = method === "POST" ? await readBody(req) : "";
+    if (method === "POST" && body && !String(req.headers["content-type"] ?? "").startsWith("application/x-www-form-urlencoded")) {
+      return apiError(res, 400, "Parameters must be sent form-encoded (application/x-www-form-urlencoded).");
+    }
     if (method === "POST" && url.pathname === "/v1/checkout/sessions") {
       const key = req.headers["idempotency-key"];
+      const paramsHash = createHash("sha256").update(body).digest("hex");
       const known = typeof key === "string" ? byIdempotencyKey.get(key) : undefined;
-      if (known) return sendJson(res, 200, sessions.get(known));
+      if (known) {
+        // As the provider does: the same key answers the same session, but only for the same parameters.
+        if (known.paramsHash !== paramsHash) return apiError(res, 400, `Keys for idempotent requests can only be used with the same parameters they were first used with. Try using a key other than '${key}' if you meant to execute a different request.`, {}, "idempotency_error");
+        return sendJson(res, 200, sessions.get(known.sessionId));
+      }
       const made = createSession(parseForm(body));
-      if (typeof made === "string") return apiError(res, 400, made);
-      sessions.set(made.id, made);
-      if (typeof key === "string") byIdempotencyKey.set(key, made.id);
-      log(`checkout session ${made.id} for ${made.amount_total} ${made.currency}`);
-      return sendJson(res, 200, made);
+      if ("message" in made) return apiError(res, 400, made.message, { param: made.param, code: "parameter_invalid" });
+      sessions.set(made.session.id, made.session);
+      lineItems.set(made.session.id, made.lines);
+      if (typeof key === "string") byIdempotencyKey.set(key, { sessionId: made.session.id, paramsHash });
+      log(`checkout session ${made.session.id} for ${made.session.amount_total} ${made.session.currency}`);
+      return sendJson(res, 200, made.session);
     }
     const one = /^\/v1\/checkout\/sessions\/([\w-]+)(\/expire)?$/.exec(url.pathname);
     if (one) {
       const s = sessions.get(one[1]!);
-      if (!s) return apiError(res, 404, `No such checkout.session: '${one[1]}'`, { code: "resource_missing" });
+      if (!s) return apiError(res, 404, `No such checkout.session: '${one[1]}'`, { code: "resource_missing", param: "session" });
       if (method === "GET" && !one[2]) return sendJson(res, 200, s);
       if (method === "POST" && one[2]) {
         if (s.status !== "open") return apiError(res, 400, `Only an open session can be expired; this one is ${s.status}.`);
-        s.status = "expired";
-        s.url = null;
-        await deliver(emit("checkout.session.expired", s));
+        await expire(s.id);
         return sendJson(res, 200, s);
       }
     }
@@ -301,6 +352,7 @@ export async function startFakeStripe(opts: FakeStripeOptions): Promise<FakeStri
     },
     pay,
     redeliver: deliver,
+    expire,
     stop: () =>
       new Promise<void>((resolve) => {
         server.close(() => resolve());

@@ -1,8 +1,11 @@
 // Paying the engineering fee, against the real test database and the fake payment provider started
-// here. The provider's webhook reaches our route handler over real HTTP (a loopback server in this
-// test hands each delivery to the handler, as Next would), signed by the fake, not by our code.
+// here, through the official SDK (`stripe`) the app uses. The provider's webhook reaches our route
+// handler over real HTTP (a loopback server in this test hands each delivery to the handler, as Next
+// would), signed by the fake with the SDK's own signer; forged and tampered deliveries below are
+// signed with the same SDK helper (`stripe.webhooks.generateTestHeaderString`).
 import { createServer, type Server } from "node:http";
 import type { AddressInfo } from "node:net";
+import Stripe from "stripe";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import * as checkoutRoute from "@/app/api/v1/invoices/[invoiceId]/checkout/route";
 import * as invoiceRoute from "@/app/api/v1/invoices/[invoiceId]/route";
@@ -11,7 +14,7 @@ import * as invoicesRoute from "@/app/api/v1/invoices/route";
 import * as webhookRoute from "@/app/api/v1/payments/webhook/route";
 import { saveFeeSettingsAction } from "@/app/(app)/settings/fees/actions";
 import { isFeePaid, reportDownloadGate } from "@/db/queries/invoices";
-import { signatureHeader, verifyWebhookSignature, WebhookSignatureError } from "@/lib/payments";
+import { StripeProvider, verifyPaymentEvent } from "@/lib/payments";
 import { startFakeStripe, type FakeStripeHandle } from "@/scripts/services/fake-stripe";
 import { actAs, callRoute, type DemoWho } from "../support/act-as";
 import { resetTables, testDb } from "./support/db";
@@ -59,6 +62,8 @@ const raise = (projectId: string) => callRoute(invoicesRoute.POST, { body: { pro
 const list = (projectId: string) => invoicesRoute.GET(new Request(`http://eigenroom.test/api/v1/invoices?projectId=${projectId}`), { params: Promise.resolve({}) });
 const checkout = (invoiceId: string) => callRoute(checkoutRoute.POST, { method: "POST", params: { invoiceId } });
 const invoiceRow = (id: string) => testDb().selectFrom("invoices").selectAll().where("id", "=", id).executeTakeFirstOrThrow();
+/** A `Stripe-Signature` header for the payload, made by the SDK's own test signer. */
+const sign = (payload: string, secret: string, timestamp?: number) => Stripe.webhooks.generateTestHeaderString({ payload, secret, ...(timestamp !== undefined && { timestamp }) });
 const postWebhook = (payload: string, signature?: string) =>
   webhookRoute.POST(new Request("http://eigenroom.test/api/v1/payments/webhook", { method: "POST", headers: { "content-type": "application/json", ...(signature && { "stripe-signature": signature }) }, body: payload }));
 
@@ -191,15 +196,15 @@ describe("POST /payments/webhook: refusals", () => {
 
   it("refuses a bad signature, a missing one and a stale one with 400, recording nothing", async () => {
     const payload = forged();
-    const wrongSecret = await postWebhook(payload, signatureHeader(payload, "whsec_someone_else"));
+    const wrongSecret = await postWebhook(payload, sign(payload, "whsec_someone_else"));
     expect(wrongSecret.status).toBe(400);
     expect((await wrongSecret.json()).error).toEqual({ code: "bad_request", message: "Webhook refused: No signature matches the payload." });
     expect((await postWebhook(payload)).status).toBe(400);
     const old = Math.floor(Date.now() / 1000) - 3600;
-    const stale = await postWebhook(payload, signatureHeader(payload, WEBHOOK_SECRET, old));
+    const stale = await postWebhook(payload, sign(payload, WEBHOOK_SECRET, old));
     expect(stale.status).toBe(400);
     expect((await stale.json()).error.message).toContain("outside the tolerance");
-    const tampered = await postWebhook(payload.replace("85000", "1"), signatureHeader(payload, WEBHOOK_SECRET));
+    const tampered = await postWebhook(payload.replace("85000", "1"), sign(payload, WEBHOOK_SECRET));
     expect(tampered.status).toBe(400);
     expect((await invoiceRow(openInvoice)).status).toBe("open");
     expect(await testDb().selectFrom("payment_events").select("id").where("provider_event_id", "like", "evt_forged_%").execute()).toEqual([]);
@@ -207,7 +212,7 @@ describe("POST /payments/webhook: refusals", () => {
 
   it("a correctly signed event whose amount differs from the invoice is recorded but does not mark it paid", async () => {
     const payload = forged({ amount_total: 100 });
-    const r = await postWebhook(payload, signatureHeader(payload, WEBHOOK_SECRET));
+    const r = await postWebhook(payload, sign(payload, WEBHOOK_SECRET));
     expect(r.status).toBe(200);
     expect((await r.json()).outcome).toBe("amount-mismatch");
     expect((await invoiceRow(openInvoice)).status).toBe("open");
@@ -215,7 +220,7 @@ describe("POST /payments/webhook: refusals", () => {
 
   it("an event we do not act on is acknowledged and ignored", async () => {
     const payload = JSON.stringify({ id: "evt_other_1", object: "event", type: "customer.created", created: Math.floor(Date.now() / 1000), livemode: false, data: { object: { id: "cus_1", object: "customer" } } });
-    const r = await postWebhook(payload, signatureHeader(payload, WEBHOOK_SECRET));
+    const r = await postWebhook(payload, sign(payload, WEBHOOK_SECRET));
     expect(await r.json()).toMatchObject({ outcome: "ignored" });
   });
 
@@ -235,11 +240,53 @@ describe("POST /payments/webhook: refusals", () => {
   });
 });
 
-describe("verifyWebhookSignature against the fake provider's own signer", () => {
-  it("accepts the fake's header for the exact payload and refuses any other payload", () => {
+describe("a session that expires", () => {
+  it("checkout.session.expired clears the invoice's session; the next checkout opens a new one with a new idempotency key", async () => {
+    await actAs("engineer");
+    const fresh = (await testDb().selectFrom("invoices").select("id").where("project_id", "=", vale).where("status", "=", "open").executeTakeFirstOrThrow()).id;
+    await actAs("client2");
+    const first = await checkout(fresh);
+    expect(first.status).toBe(200);
+    const firstId = (await invoiceRow(fresh)).checkout_session_id!;
+    const expired = await stripe.expire(firstId);
+    expect(expired).toMatchObject({ type: "checkout.session.expired", status: 200 });
+    expect(await testDb().selectFrom("payment_events").select("outcome").where("provider_event_id", "=", expired.eventId).executeTakeFirstOrThrow()).toEqual({ outcome: "session-expired" });
+    expect((await invoiceRow(fresh)).checkout_session_id).toBeNull();
+    const second = await checkout(fresh);
+    expect(second.status).toBe(200);
+    expect(second.json.url).not.toBe(first.json.url);
+    const secondId = (await invoiceRow(fresh)).checkout_session_id!;
+    expect(stripe.sessions.get(secondId)).toMatchObject({ status: "open", metadata: { invoice_id: fresh } });
+    expect(stripe.sessions.get(firstId)).toMatchObject({ status: "expired", url: null });
+  });
+});
+
+describe("StripeProvider (the official SDK) against the fake provider", () => {
+  const input = (invoiceId: string) => ({ invoiceId, description: "Engineering fee — test", amountMinor: 12345, currency: "GBP", successUrl: "http://127.0.0.1:3998/ok", cancelUrl: "http://127.0.0.1:3998/no", idempotencyKey: `sdk-test:${invoiceId}` });
+
+  it("creates a session from the SDK's form-encoded call and retrieves it; the same idempotency key answers the same session", async () => {
+    const provider = new StripeProvider({ secretKey: SECRET_KEY, apiUrl: stripe.apiUrl });
+    const made = await provider.createCheckoutSession(input("inv-sdk-1"));
+    expect(made).toEqual({ id: expect.stringMatching(/^cs_test_/), url: `${stripe.apiUrl}/pay/${made.id}`, status: "open", paid: false, amountMinor: 12345, currency: "GBP", invoiceId: "inv-sdk-1" });
+    expect(await provider.retrieveCheckoutSession(made.id)).toEqual(made);
+    expect((await provider.createCheckoutSession(input("inv-sdk-1"))).id).toBe(made.id);
+  });
+
+  it("surfaces the provider's refusals as the SDK's errors: reused key with other parameters, unknown session, wrong secret key", async () => {
+    const provider = new StripeProvider({ secretKey: SECRET_KEY, apiUrl: stripe.apiUrl, maxNetworkRetries: 0 });
+    await provider.createCheckoutSession(input("inv-sdk-2"));
+    await expect(provider.createCheckoutSession({ ...input("inv-sdk-2"), amountMinor: 1 })).rejects.toBeInstanceOf(Stripe.errors.StripeIdempotencyError);
+    await expect(provider.retrieveCheckoutSession("cs_test_nothing")).rejects.toMatchObject({ type: "StripeInvalidRequestError", statusCode: 404, code: "resource_missing" });
+    const stranger = new StripeProvider({ secretKey: "sk_test_not_this_one", apiUrl: stripe.apiUrl, maxNetworkRetries: 0 });
+    await expect(stranger.retrieveCheckoutSession("cs_test_nothing")).rejects.toBeInstanceOf(Stripe.errors.StripeAuthenticationError);
+  });
+
+  it("verifyPaymentEvent (stripe.webhooks.constructEvent) accepts the fake's delivery for its exact body and refuses any other body", () => {
     const d = stripe.deliveries[0]!;
-    expect(verifyWebhookSignature(d.payload, d.signature, WEBHOOK_SECRET)).toBe(Number(/t=(\d+)/.exec(d.signature)![1]));
-    expect(() => verifyWebhookSignature(`${d.payload} `, d.signature, WEBHOOK_SECRET)).toThrow(WebhookSignatureError);
-    expect(() => verifyWebhookSignature(d.payload, "t=abc,v1=00", WEBHOOK_SECRET)).toThrow("no timestamp");
+    const verified = verifyPaymentEvent(d.payload, d.signature, WEBHOOK_SECRET);
+    expect(verified).toMatchObject({ ok: true, event: { id: d.eventId, type: "checkout.session.completed", data: { object: { object: "checkout.session", payment_status: "paid" } } } });
+    expect(verifyPaymentEvent(`${d.payload} `, d.signature, WEBHOOK_SECRET)).toEqual({ ok: false, reason: "No signature matches the payload." });
+    const ids = new Set(stripe.deliveries.map((x) => x.eventId));
+    expect(ids.size).toBe(new Set(stripe.deliveries.map((x) => x.payload)).size); // one id per event, retries share it
   });
 });
