@@ -1,5 +1,7 @@
-// The local stand-ins for object storage and the payment provider, started together by npm start and
-// npm test unless the environment already points at real ones (S3_BUCKET / STRIPE_SECRET_KEY set).
+// The local stand-ins for object storage (s3rver) and the payment provider (our fake of the API the
+// stripe SDK calls), started together by npm start and npm test unless the environment already
+// points at real ones (S3_BUCKET / STRIPE_SECRET_KEY set). The app reaches both through the usual
+// SDKs (@aws-sdk/client-s3, stripe); only the endpoints differ.
 import { randomBytes } from "node:crypto";
 import { rm } from "node:fs/promises";
 import path from "node:path";
@@ -23,9 +25,9 @@ export async function startLocalProviders(opts: { root: string; s3Dir?: string; 
     const dir = opts.s3Dir ?? path.join(opts.root, ".data", "s3");
     // The test database is new each run; so is its bucket.
     if (opts.freshS3) await rm(dir, { recursive: true, force: true });
-    s3 = await startFakeS3({ port: opts.s3Port, dir, bucket: "eigenroom-local", accessKeyId: "eigenroom-local", log });
-    Object.assign(env, { S3_ENDPOINT: s3.endpoint, S3_BUCKET: "eigenroom-local", S3_ACCESS_KEY_ID: "eigenroom-local", S3_SECRET_ACCESS_KEY: "eigenroom-local-secret", S3_REGION: "us-east-1" });
-    notes.push(`fake S3 on ${s3.endpoint} (files in ${path.relative(opts.root, dir)})`);
+    s3 = await startFakeS3({ port: opts.s3Port, dir, bucket: "eigenroom-local", log });
+    Object.assign(env, { S3_ENDPOINT: s3.endpoint, S3_BUCKET: "eigenroom-local", S3_ACCESS_KEY_ID: s3.accessKeyId, S3_SECRET_ACCESS_KEY: s3.secretAccessKey, S3_REGION: "us-east-1", S3_FORCE_PATH_STYLE: "true" });
+    notes.push(`fake S3 (s3rver) on ${s3.endpoint} (files in ${path.relative(opts.root, dir)})`);
   }
   if (!process.env.STRIPE_SECRET_KEY) {
     // A fresh pair each run: nothing to keep secret, nothing to commit.
@@ -34,7 +36,7 @@ export async function startLocalProviders(opts: { root: string; s3Dir?: string; 
     const webhookUrl = `${opts.appUrl.replace(/\/+$/, "")}/api/v1/payments/webhook`;
     stripe = await startFakeStripe({ port: opts.stripePort, secretKey, webhookSecret, webhookUrl, log });
     Object.assign(env, { STRIPE_SECRET_KEY: secretKey, STRIPE_API_URL: stripe.apiUrl, STRIPE_WEBHOOK_SECRET: webhookSecret });
-    notes.push(`fake payment provider on ${stripe.apiUrl} (webhooks to ${webhookUrl})`);
+    notes.push(`fake payment provider on ${stripe.apiUrl} for the stripe SDK (webhooks to ${webhookUrl})`);
   }
   return {
     env,
