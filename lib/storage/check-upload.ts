@@ -1,7 +1,7 @@
 import type { RoomFileKind, StoredContentType } from "@/db/schema";
 import { AppError } from "@/lib/api/errors";
-import { ACCEPTED_TYPES, EXTENSION_OF, KIND_LABEL, MAX_UPLOAD_BYTES, TYPE_LABEL, formatBytes } from "./limits";
-import { extensionsOf, PROGRAM_EXTENSIONS, sniffProgram, sniffType } from "./sniff";
+import { ACCEPTED_TYPES, EXTENSION_OF, KIND_LABEL, MAX_UPLOAD_BYTES, TYPE_LABEL, formatBytes, notAcceptedMessage, tooLargeMessage } from "./limits";
+import { extensionsOf, PROGRAM_EXTENSIONS, sniff } from "./sniff";
 
 export interface CheckedUpload {
   contentType: StoredContentType;
@@ -21,20 +21,21 @@ export function cleanFileName(raw: string): string {
 /**
  * Refuses what must not be stored, with a message a person can act on: empty or too large files,
  * programs (also disguised under an image or PDF name), and anything that is not an accepted type
- * for the kind. Throws AppError `payload_too_large` (413) or `unsupported_media_type` (415).
+ * for the kind. The type comes from the bytes (`file-type`, see sniff.ts), never from the name or
+ * the browser. Throws AppError `payload_too_large` (413) or `unsupported_media_type` (415).
  *
- * @example checkUpload({ name: "rear wall.jpg", kind: "photo", bytes }) // { contentType: "image/jpeg", … }
+ * @example await checkUpload({ name: "rear wall.jpg", kind: "photo", bytes }) // { contentType: "image/jpeg", … }
  */
-export function checkUpload({ name, kind, bytes }: { name: string; kind: RoomFileKind; bytes: Uint8Array }): CheckedUpload {
+export async function checkUpload({ name, kind, bytes }: { name: string; kind: RoomFileKind; bytes: Uint8Array }): Promise<CheckedUpload> {
   const clean = cleanFileName(name);
   if (!clean) throw new AppError("bad_request", "The file needs a name.", { file: ["The file has no name"] });
   if (bytes.byteLength === 0) throw new AppError("bad_request", `“${clean}” is empty.`, { file: ["The file is empty"] });
   if (bytes.byteLength > MAX_UPLOAD_BYTES) {
-    throw new AppError("payload_too_large", `“${clean}” is ${formatBytes(bytes.byteLength)}; files may be at most ${formatBytes(MAX_UPLOAD_BYTES)}.`, {
+    throw new AppError("payload_too_large", tooLargeMessage(clean, bytes.byteLength), {
       file: [`Larger than ${formatBytes(MAX_UPLOAD_BYTES)}`],
     });
   }
-  const program = sniffProgram(bytes);
+  const { type, program } = await sniff(bytes);
   if (program) {
     throw new AppError("unsupported_media_type", `“${clean}” is ${program}, not a picture or a PDF, whatever its name says. It was not stored.`, {
       file: [`This is ${program}; programs are never accepted`],
@@ -47,13 +48,8 @@ export function checkUpload({ name, kind, bytes }: { name: string; kind: RoomFil
     });
   }
   const accepted = ACCEPTED_TYPES[kind];
-  const type = sniffType(bytes);
   const list = accepted.map((t) => TYPE_LABEL[t]).join(", ");
-  if (!type) {
-    throw new AppError("unsupported_media_type", `“${clean}” is not a ${list.replace(/, ([^,]*)$/, " or $1")}. Export it in one of those formats and try again.`, {
-      file: ["Not an accepted file type"],
-    });
-  }
+  if (!type) throw new AppError("unsupported_media_type", notAcceptedMessage(clean, kind), { file: ["Not an accepted file type"] });
   if (!accepted.includes(type)) {
     throw new AppError("unsupported_media_type", `A ${KIND_LABEL[kind].toLowerCase()} must be a ${list}; “${clean}” is a ${TYPE_LABEL[type]}.`, {
       file: [`A ${TYPE_LABEL[type]} is not accepted as a ${KIND_LABEL[kind].toLowerCase()}`],

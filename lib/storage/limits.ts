@@ -31,6 +31,28 @@ export const KIND_LABEL: Record<RoomFileKind, string> = {
   "client-file": "Client's file",
 };
 
+/**
+ * What the file picker and the drop zone offer for a kind (by the browser's type or the name's
+ * ending). Only a first sieve for a quick answer: the server decides by the bytes.
+ */
+export const PICKER_ACCEPT: Record<StoredContentType, string[]> = {
+  "image/jpeg": [".jpg", ".jpeg"],
+  "image/png": [".png"],
+  "image/webp": [".webp"],
+  "application/pdf": [".pdf"],
+};
+
+/** “huge.jpg” is 20.0 MB; files may be at most 20 MB. (The same words in the browser and from the server.) */
+export function tooLargeMessage(name: string, bytes: number): string {
+  return `“${name}” is ${formatBytes(bytes)}; files may be at most ${formatBytes(MAX_UPLOAD_BYTES)}.`;
+}
+
+/** “notes.txt” is not a PDF document, JPEG image, PNG image or WebP image. Export it … (for a client's file). */
+export function notAcceptedMessage(name: string, kind: RoomFileKind): string {
+  const list = ACCEPTED_TYPES[kind].map((t) => TYPE_LABEL[t]).join(", ");
+  return `“${name}” is not a ${list.replace(/, ([^,]*)$/, " or $1")}. Export it in one of those formats and try again.`;
+}
+
 export const ROOM_FILE_KINDS: readonly RoomFileKind[] = ["photo", "drawing", "client-file"];
 
 /** "4.2 MB" — in units of 1024, as the limit is set (20 MB = 20 × 1024² bytes). */

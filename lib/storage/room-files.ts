@@ -65,7 +65,7 @@ export interface UploadInput {
 export async function uploadRoomFile(db: Kysely<Database>, storage: ObjectStorage, actor: Actor, roomId: string, input: UploadInput): Promise<RoomFile> {
   const { room } = await roomFor(db, actor, roomId, "file.upload");
   if (!UPLOAD_KINDS[actor.role].includes(input.kind)) throw forbidden(KIND_REFUSAL[actor.role]);
-  const checked = checkUpload({ name: input.name, kind: input.kind, bytes: input.bytes });
+  const checked = await checkUpload({ name: input.name, kind: input.kind, bytes: input.bytes });
   const image = await makeThumbnail(input.bytes, checked.contentType, checked.name);
   void sweepStorageDeletions(db, storage, { limit: 10 }).catch((error: unknown) => console.error("[storage] sweep failed", error));
 

@@ -1,41 +1,59 @@
-// Pure: recognises a file by its first bytes (its "magic number"), not by its name.
+// Recognises a file by its bytes (its signature), never by its name, with `file-type`.
+import { fileTypeFromBuffer } from "file-type";
 import type { StoredContentType } from "@/db/schema";
 
-const startsWith = (bytes: Uint8Array, sig: readonly number[], offset = 0) => bytes.length >= offset + sig.length && sig.every((b, i) => bytes[offset + i] === b);
-const ascii = (s: string) => [...s].map((c) => c.charCodeAt(0));
-
-/**
- * The accepted type these bytes are, or undefined. Signatures: JPEG SOI marker FF D8 FF (ITU-T T.81
- * Annex B); PNG's eight-byte signature (ISO/IEC 15948 §5.2); WebP "RIFF" size "WEBP" (RFC 9649 §2.5);
- * PDF "%PDF-" header (ISO 32000-1 §7.5.2).
- *
- * @example sniffType(new Uint8Array([0xff, 0xd8, 0xff, 0xe0])) // "image/jpeg"
- */
-export function sniffType(bytes: Uint8Array): StoredContentType | undefined {
-  if (startsWith(bytes, [0xff, 0xd8, 0xff])) return "image/jpeg";
-  if (startsWith(bytes, [0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a])) return "image/png";
-  if (startsWith(bytes, ascii("RIFF")) && startsWith(bytes, ascii("WEBP"), 8)) return "image/webp";
-  if (startsWith(bytes, ascii("%PDF-"))) return "application/pdf";
-  return undefined;
+/** What the bytes are: an accepted type, a program (how to call it), or neither. */
+export interface Sniffed {
+  type?: StoredContentType;
+  /** "a Windows program", "a compressed archive", … — refused whatever the file is called. */
+  program?: string;
 }
 
-const PROGRAMS: { name: string; sig: readonly number[] }[] = [
-  { name: "a Windows program", sig: ascii("MZ") },
-  { name: "a Linux program", sig: [0x7f, 0x45, 0x4c, 0x46] },
-  { name: "a macOS program", sig: [0xfe, 0xed, 0xfa, 0xce] },
-  { name: "a macOS program", sig: [0xfe, 0xed, 0xfa, 0xcf] },
-  { name: "a macOS program", sig: [0xce, 0xfa, 0xed, 0xfe] },
-  { name: "a macOS program", sig: [0xcf, 0xfa, 0xed, 0xfe] },
-  { name: "a macOS or Java program", sig: [0xca, 0xfe, 0xba, 0xbe] },
-  { name: "a script", sig: ascii("#!") },
-  { name: "an installer package", sig: [0xd0, 0xcf, 0x11, 0xe0, 0xa1, 0xb1, 0x1a, 0xe1] },
-  { name: "a compressed archive", sig: [0x50, 0x4b, 0x03, 0x04] },
-  { name: "a WebAssembly module", sig: [0x00, 0x61, 0x73, 0x6d] },
-];
+// file-type's answers (by extension) that we store, and as what; an animated PNG is a PNG.
+export const SNIFFED_TYPES: Readonly<Record<string, StoredContentType>> = {
+  jpg: "image/jpeg",
+  png: "image/png",
+  apng: "image/png",
+  webp: "image/webp",
+  pdf: "application/pdf",
+};
 
-/** What kind of program the bytes are ("a Windows program", …), or undefined when they are not one. */
-export function sniffProgram(bytes: Uint8Array): string | undefined {
-  return PROGRAMS.find((p) => startsWith(bytes, p.sig))?.name;
+// file-type's answers that run code, install it, or can carry it unseen (archives).
+export const SNIFFED_PROGRAMS: Readonly<Record<string, string>> = {
+  exe: "a Windows program",
+  lnk: "a Windows shortcut",
+  elf: "a Linux program",
+  macho: "a macOS program",
+  dmg: "a macOS disk image",
+  class: "a Java program",
+  jar: "a Java program",
+  apk: "an Android app",
+  wasm: "a WebAssembly module",
+  swf: "a Flash program",
+  crx: "a browser extension",
+  xpi: "a browser extension",
+  cfb: "an installer package",
+  deb: "an installer package",
+  rpm: "an installer package",
+  asar: "an application archive",
+  ...Object.fromEntries(["zip", "tar", "rar", "gz", "bz2", "7z", "xz", "cab", "ar", "lz", "lzh", "lz4", "zst", "cpio", "arj", "tar.gz"].map((e) => [e, "a compressed archive"])),
+};
+
+/**
+ * What these bytes are, by their signature (`fileTypeFromBuffer`: JPEG SOI marker, PNG signature,
+ * RIFF/WEBP, %PDF- header, MZ/ELF/Mach-O executables, archives …). file-type reads binary formats
+ * only; a script is recognised here by its "#!" interpreter line (POSIX exec convention).
+ *
+ * @example await sniff(new Uint8Array([0x4d, 0x5a, 0x90, 0x00])) // { program: "a Windows program" }
+ */
+export async function sniff(bytes: Uint8Array): Promise<Sniffed> {
+  if (bytes.length >= 2 && bytes[0] === 0x23 && bytes[1] === 0x21) return { program: "a script" };
+  const found = await fileTypeFromBuffer(bytes);
+  if (!found) return {};
+  const program = SNIFFED_PROGRAMS[found.ext];
+  if (program) return { program };
+  const type = SNIFFED_TYPES[found.ext];
+  return type ? { type } : {};
 }
 
 /** File-name endings that run code when opened; refused whatever the content. */
