@@ -1,5 +1,7 @@
 "use client";
 
+import type { ReactNode } from "react";
+
 import { useQueryClient } from "@tanstack/react-query";
 import Link from "next/link";
 import { usePathname, useRouter, useSearchParams } from "next/navigation";
@@ -91,7 +93,7 @@ export function analysisRoomFrom(w: Workspace, positions: PlanPosition[]): Analy
  * through TanStack Query (initial data from the server page), saves through the server actions with
  * the version read, and the conflict banner on a stale save.
  */
-export function RoomWorkspace({ roomId, initial, initialScenarios, initialBuilds, units, canSaveBuilds }: { roomId: string; initial: Workspace; initialScenarios: Scenario[]; initialBuilds: Build[]; units: UnitSystem; canSaveBuilds: boolean }) {
+export function RoomWorkspace({ roomId, initial, initialScenarios, initialBuilds, units, canSaveBuilds, roomTabFooter, designLinks }: { roomId: string; initial: Workspace; initialScenarios: Scenario[]; initialBuilds: Build[]; units: UnitSystem; canSaveBuilds: boolean; roomTabFooter?: ReactNode; designLinks?: ReactNode }) {
   const router = useRouter();
   const pathname = usePathname();
   const params = useSearchParams();
@@ -212,6 +214,7 @@ export function RoomWorkspace({ roomId, initial, initialScenarios, initialBuilds
       </nav>
       <h2 className="hidden text-xl print:block">{TABS.find((t) => t.id === tab)!.label}</h2>
       {tab === "room" && <RoomTab ws={ws} positions={positions} units={units} actions={actions} onMove={move} />}
+      {tab === "room" && roomTabFooter}
       {tab === "low-end" && <LowEndTab ws={ws} positions={positions} units={units} live={live} scenario={current} scenarios={active} onScenario={(id) => setParam({ scenario: id })} actions={actions} onMove={move} />}
       {tab === "absorbers" && <AbsorbersTab units={units} builds={builds} canSave={canSaveBuilds} actions={actions} />}
       {tab === "decay" && <DecayTab ws={ws} scenarios={scenarios} current={current} units={units} builds={builds} actions={actions} onScenario={(id) => setParam({ scenario: id })} />}

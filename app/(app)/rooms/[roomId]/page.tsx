@@ -9,6 +9,7 @@ import { compareScenarios } from "@/db/queries/scenarios";
 import { getWorkspace } from "@/db/queries/workspace";
 import { DeleteRoomButton } from "@/components/projects/project-actions";
 import { Card, Notice, PageHeader } from "@/components/ui/card";
+import { RoomFilesPanel } from "@/components/files/room-files-panel";
 import { RoomWorkspace } from "@/components/workspace/room-workspace";
 import { AppError } from "@/lib/api/errors";
 import { canInFirm, canOnProject } from "@/lib/auth/permissions";
@@ -62,7 +63,7 @@ export default async function RoomPage({ params }: { params: Promise<{ roomId: s
         <div className="mt-4">
           <Notice>Your engineer&apos;s findings and recommendation for this room reach you in the signed report.</Notice>
         </div>
-        {await import("@/components/files/room-files-panel").then(({ RoomFilesPanel }) => <RoomFilesPanel actor={actor} roomId={room.id} />)}
+        <RoomFilesPanel actor={actor} roomId={room.id} />
       </>
     );
   }
@@ -76,9 +77,16 @@ export default async function RoomPage({ params }: { params: Promise<{ roomId: s
     <>
       {header}
       <Suspense>
-        <RoomWorkspace roomId={room.id} initial={workspace} initialScenarios={scenarios} initialBuilds={builds} units={u} canSaveBuilds={canInFirm(actor, "library.manage")} />
+        <RoomWorkspace
+          roomId={room.id}
+          initial={workspace}
+          initialScenarios={scenarios}
+          initialBuilds={builds}
+          units={u}
+          canSaveBuilds={canInFirm(actor, "library.manage")}
+          roomTabFooter={<RoomFilesPanel actor={actor} roomId={room.id} />}
+        />
       </Suspense>
-      {await import("@/components/files/room-files-panel").then(({ RoomFilesPanel }) => <RoomFilesPanel actor={actor} roomId={room.id} />)}
     </>
   );
 }
