@@ -54,6 +54,44 @@ function pairLists(spec: PairSpectra, NY: number, W: number, odd: 0 | 1) {
   return { start, rows, nx };
 }
 
+type PairList = ReturnType<typeof pairLists>;
+
+/** Tables and scratch of step 2, shared by the groups of one call. */
+interface Step2 {
+  NY: number; W: number; hx: number; maxList: number; even: PairList; odd: PairList; Cx: Float64Array; coefX: Float64Array;
+  stepE: DotKernel[]; stepO: DotKernel[]; B: Float64Array; G: Float64Array; rowE: Float64Array; rowO: Float64Array;
+}
+
+/**
+ * Step 2 for the four x-halves i0 .. i0 + 3 (clamped to the last): G_ny(x_i) = sum_nx cos(nx pi x_i/Lx) B[nx,ny],
+ * even and odd nx apart; slot 2q of G holds x_i (even + odd) and slot 2q + 1 its mirror (even - odd).
+ */
+function step2Group(c: Step2, i0: number): void {
+  const { NY, W, hx, maxList, even, odd, Cx, coefX, stepE, stepO, B, G, rowE, rowO } = c;
+  for (let y = 0; y < NY; y++) {
+    const e0 = even.start[y]!, ne = even.start[y + 1]! - e0;
+    const o0 = odd.start[y]!, no = odd.start[y + 1]! - o0;
+    for (let q = 0; q < 4; q++) {
+      const i = Math.min(i0 + q, hx - 1);
+      for (let k = 0; k < ne; k++) coefX[q * maxList + k] = Cx[even.nx[e0 + k]! * hx + i]!;
+    }
+    stepE[y]!(rowE, 0, W, B, even.rows, e0, 0, coefX, 0, maxList, W);
+    for (let q = 0; q < 4; q++) {
+      const i = Math.min(i0 + q, hx - 1);
+      for (let k = 0; k < no; k++) coefX[q * maxList + k] = Cx[odd.nx[o0 + k]! * hx + i]!;
+    }
+    stepO[y]!(rowO, 0, W, B, odd.rows, o0, 0, coefX, 0, maxList, W);
+    for (let q = 0; q < 4; q++) {
+      const g1 = (2 * q * NY + y) * W, g2 = ((2 * q + 1) * NY + y) * W, r = q * W;
+      for (let t = 0; t < W; t++) {
+        const e = rowE[r + t]!, o = rowO[r + t]!;
+        G[g1 + t] = e + o;
+        G[g2 + t] = e - o;
+      }
+    }
+  }
+}
+
 /** Tables and scratch of step 3, shared by the rows of one call. */
 interface Step3 {
   nf: number; W: number; hy: number; gridY: number;
@@ -124,7 +162,10 @@ function step3RowQuarter(c: Step3, G: Float64Array, g0: number, ix: number): voi
  * Population standard deviation over frequency of 20 log10 |H| at every cell centre of a gridX x gridY
  * grid, dB, index ix * gridY + iy (CONTRACTS.md flatnessMap), from the pair spectra of step 1.
  */
-export function flatnessFromSpectra(spec: PairSpectra, gridX: number, gridY: number, progress: ProgressOptions): Float64Array {
+export function flatnessFromSpectra(
+  spec: PairSpectra, gridX: number, gridY: number, progress: ProgressOptions,
+  take: (name: string, length: number, zero: boolean) => Float64Array = (_n, len) => new Float64Array(len),
+): Float64Array {
   const { pairs, nf, B } = spec;
   const W = 2 * nf;
   let NX = 1, NY = 1;
@@ -150,8 +191,9 @@ export function flatnessFromSpectra(spec: PairSpectra, gridX: number, gridY: num
   const coefX = new Float64Array(4 * maxList);
   const stepE = Array.from({ length: NY }, (_, y) => dotKernel(even.start[y + 1]! - even.start[y]!, 4));
   const stepO = Array.from({ length: NY }, (_, y) => dotKernel(odd.start[y + 1]! - odd.start[y]!, 4));
-  const G = new Float64Array(8 * NY * W);
-  const rowE = new Float64Array(4 * W), rowO = new Float64Array(4 * W);
+  // Scratch (every element is written before it is read).
+  const G = take("G", 8 * NY * W, false);
+  const rowE = take("rowE", 4 * W, false), rowO = take("rowO", 4 * W, false);
   // Quarter path tables (used when gridY is even).
   const quarter = gridY % 2 === 0 && hy >= 2;
   const n0 = Math.ceil(NY / 4), n2 = Math.floor((NY + 1) / 4);
@@ -170,44 +212,24 @@ export function flatnessFromSpectra(spec: PairSpectra, gridX: number, gridY: num
     nf, W, hy, gridY,
     gEvenRows, gOddRows, cyE, cyO, nyEven, nyOdd, dotE: dotKernel(nyEven, 8), dotO: dotKernel(nyOdd, 8),
     quarter, g0Rows, g2Rows, cy0, cy2, cyOPartner, n0, n2, dot0: dotKernel(n0, 8), dot2: dotKernel(n2, 8),
-    accE: new Float64Array(8 * W), accE2: new Float64Array(8 * W), accO: new Float64Array(8 * W), accO2: new Float64Array(8 * W),
+    accE: take("accE", 8 * W, false), accE2: take("accE2", 8 * W, false), accO: take("accO", 8 * W, false), accO2: take("accO2", 8 * W, false),
     pw, pwBits: new Int32Array(pw.buffer), variances: new Float64Array(4), out: new Float64Array(gridX * gridY),
   };
   const rowStep = quarter ? step3RowQuarter : step3Row;
 
+  const s2: Step2 = { NY, W, hx, maxList, even, odd, Cx, coefX, stepE, stepO, B, G, rowE, rowO };
+  const onProgress = progress.onProgress, signal = progress.signal;
   const groups = Math.ceil(hx / 4);
   for (let gI = 0; gI < groups; gI++) {
-    throwIfAborted(progress.signal);
+    throwIfAborted(signal);
     const i0 = 4 * gI;
-    // Step 2: G_ny(x_i) = sum_nx cos(nx pi x_i/Lx) B[nx,ny], even and odd nx apart; the mirror row is even - odd.
-    for (let y = 0; y < NY; y++) {
-      const e0 = even.start[y]!, ne = even.start[y + 1]! - e0;
-      const o0 = odd.start[y]!, no = odd.start[y + 1]! - o0;
-      for (let q = 0; q < 4; q++) {
-        const i = Math.min(i0 + q, hx - 1);
-        for (let k = 0; k < ne; k++) coefX[q * maxList + k] = Cx[even.nx[e0 + k]! * hx + i]!;
-      }
-      stepE[y]!(rowE, 0, W, B, even.rows, e0, 0, coefX, 0, maxList, W);
-      for (let q = 0; q < 4; q++) {
-        const i = Math.min(i0 + q, hx - 1);
-        for (let k = 0; k < no; k++) coefX[q * maxList + k] = Cx[odd.nx[o0 + k]! * hx + i]!;
-      }
-      stepO[y]!(rowO, 0, W, B, odd.rows, o0, 0, coefX, 0, maxList, W);
-      for (let q = 0; q < 4; q++) {
-        const g1 = (2 * q * NY + y) * W, g2 = ((2 * q + 1) * NY + y) * W, r = q * W;
-        for (let t = 0; t < W; t++) {
-          const e = rowE[r + t]!, o = rowO[r + t]!;
-          G[g1 + t] = e + o;
-          G[g2 + t] = e - o;
-        }
-      }
-    }
+    step2Group(s2, i0);
     for (let q = 0; q < 4 && i0 + q < hx; q++) {
       const i = i0 + q, i2 = gridX - 1 - i;
       rowStep(ctx, G, 2 * q * NY * W, i);
       if (i2 !== i) rowStep(ctx, G, (2 * q + 1) * NY * W, i2);
     }
-    progress.onProgress?.((gI + 1) / groups);
+    if (onProgress !== undefined) onProgress((gI + 1) / groups);
   }
   return ctx.out;
 }

@@ -2,6 +2,7 @@ import { flatnessFromSpectra } from "./flatness-kernel";
 import { LIMITS } from "./limits";
 import { enumerateModes } from "./mode-set";
 import { pairSpectra } from "./pair-spectra";
+import { withScratch } from "./scratch";
 import type { Point3, ProgressOptions, RectRoom, SoundSource } from "./types";
 import {
   checkFrequencies, checkFrequency, checkInteger, checkNumber, checkPoint, checkRoom, checkRt60, checkSources, checkSpeedOfSound,
@@ -71,8 +72,7 @@ export function multiSourceFlatnessMap(room: RectRoom, options: FlatnessGridOpti
   const work = gridX * gridY * freqs.length * ((NY + 1) / 2);
   if (work > LIMITS.maxFlatnessWork)
     throw new RangeError(`gridX, gridY: ${gridX} x ${gridY} cells, ${freqs.length} frequencies and modes up to ${fMax} Hz need about ${work.toExponential(1)} operations; the limit is ${LIMITS.maxFlatnessWork.toExponential(0)}`);
-  const spectra = pairSpectra(room, set, sources, z0, freqs, t60);
-  const stdDevDb = flatnessFromSpectra(spectra, gridX, gridY, options);
+  const stdDevDb = withScratch((take) => flatnessFromSpectra(pairSpectra(room, set, sources, z0, freqs, t60, take), gridX, gridY, options, take));
   return {
     xM: Array.from({ length: gridX }, (_, i) => ((i + 0.5) * room.lengthM) / gridX),
     yM: Array.from({ length: gridY }, (_, j) => ((j + 0.5) * room.widthM) / gridY),

@@ -12,7 +12,10 @@ import type { RectRoom, SoundSource } from "./types";
  * B[nx,ny](omega) = omega sum_nz cos(nz pi z0/Lz) S_n(omega) / (Lambda_n (omega^2 - omega_n^2 - 2j delta omega_n)),
  * with S_n(omega) = sum_s p_s e^{-j omega tau_s} psi_n(r_s).
  */
-export function pairSpectra(room: RectRoom, set: ModeSet, sources: SoundSource[], z0: number, freqs: ArrayLike<number>, t60: number): PairSpectra {
+export function pairSpectra(
+  room: RectRoom, set: ModeSet, sources: SoundSource[], z0: number, freqs: ArrayLike<number>, t60: number,
+  take: (name: string, length: number, zero: boolean) => Float64Array = (_n, len) => new Float64Array(len),
+): PairSpectra {
   const nf = freqs.length, M = set.count, S = sources.length;
   const omega = angular(freqs);
   const delta = dampingConstant(t60);
@@ -36,7 +39,7 @@ export function pairSpectra(room: RectRoom, set: ModeSet, sources: SoundSource[]
         `${pairs} spectra of ${nf} values and ${NY} rows (limits ${LIMITS.maxPairFrequencyProducts} and ${LIMITS.maxRowFrequencyProducts} values); lower maxModeFrequencyHz or use fewer frequencies`,
     );
   const W = 2 * nf;
-  const B = new Float64Array(pairs * W);
+  const B = take("B", pairs * W, true);
   const kz = (Math.PI * z0) / room.heightM;
   for (let n = 0; n < M; n++) {
     const o = index[set.nx[n]! * NY + set.ny[n]!]! * W;
