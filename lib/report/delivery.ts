@@ -81,9 +81,9 @@ export async function issueRevision(db: Kysely<Database>, actor: Actor, revision
   return { revision: issued, renderMs: t1 - t0, signMs: t2 - t1 };
 }
 
-/** The portal address of a project's reports. */
+/** The portal link of a project's reports (through sign-in when needed: app/api/v1/reports/portal). */
 export function portalUrl(projectId: string): string {
-  return new URL(`/projects/${projectId}/reports`, serverEnv().APP_URL).href;
+  return new URL(`/api/v1/reports/portal/${projectId}`, serverEnv().APP_URL).href;
 }
 
 /**

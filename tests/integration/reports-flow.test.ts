@@ -142,8 +142,8 @@ describe("report flow on the demo room", () => {
     expect(res.json.sent).toMatchObject({ to: "client@larchmere.example", invited: false, attached: true });
     const mail = await waitForMail("client@larchmere.example", after);
     expect(mail.subject).toMatch(/ER-\d{4}-0001, revision 1/);
-    expect(mail.text_body).toContain(`/projects/${ids.projectId}/reports`);
-    expect(mail.html_body).toContain(`/projects/${ids.projectId}/reports`);
+    expect(mail.text_body).toContain(`/api/v1/reports/portal/${ids.projectId}`);
+    expect(mail.html_body).toContain(`/api/v1/reports/portal/${ids.projectId}`);
     expect(mail.attachments).toEqual([expect.objectContaining({ contentType: "application/pdf", filename: expect.stringMatching(/-rev1\.pdf$/), size: pdf1.length })]);
   });
 

@@ -130,7 +130,7 @@ describe("report server actions × roles", () => {
     expect(r.ok && r.data.attached).toBe(false);
     const mail = await waitForMail("client@larchmere.example", after);
     expect(mail.attachments).toEqual([]);
-    expect(mail.text_body).toContain(`/projects/${ids.projectId}/reports`);
+    expect(mail.text_body).toContain(`/api/v1/reports/portal/${ids.projectId}`);
   });
 
   it("approve and question actions for the client", async () => {
@@ -161,9 +161,26 @@ describe("a client without an account", () => {
     const invite = await waitForMail("odile.marsh@invented.example", after);
     const all = await testDb().selectFrom("dev_outbox").select(["subject", "text_body"]).where("id", ">", after).execute();
     expect(all.some((m) => m.text_body?.includes("/accept-invite?token="))).toBe(true);
-    expect(all.some((m) => m.text_body?.includes(`/projects/${project.id}/reports`))).toBe(true);
+    expect(all.some((m) => m.text_body?.includes(`/api/v1/reports/portal/${project.id}`))).toBe(true);
     expect(invite).toBeTruthy();
     const linked = await testDb().selectFrom("projects as p").innerJoin("users as u", "u.id", "p.client_user_id").select(["u.email", "u.role"]).where("p.id", "=", project.id).executeTakeFirstOrThrow();
     expect(linked).toEqual({ email: "odile.marsh@invented.example", role: "client" });
   }, 120_000);
+});
+
+describe("the portal link of report e-mails", () => {
+  it("sends a signed-in person to the reports, anyone else through sign-in back there", async () => {
+    const portal = await import("@/app/api/v1/reports/portal/[projectId]/route");
+    const call = (projectId: string) => portal.GET(new Request(`http://eigenroom.test/api/v1/reports/portal/${projectId}`), { params: Promise.resolve({ projectId }) });
+    await actAs("client");
+    let res = await call(ids.projectId);
+    expect(res.status).toBe(303);
+    expect(new URL(res.headers.get("location")!).pathname).toBe(`/projects/${ids.projectId}/reports`);
+    await actAs("anonymous");
+    res = await call(ids.projectId);
+    const to = new URL(res.headers.get("location")!);
+    expect(to.pathname).toBe("/sign-in");
+    expect(to.searchParams.get("next")).toBe(`/projects/${ids.projectId}/reports`);
+    expect((await call("not-a-uuid")).status).toBe(404);
+  });
 });
