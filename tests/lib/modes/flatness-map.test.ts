@@ -51,6 +51,15 @@ describe("flatnessMap(room, { source, heightM, gridX, gridY, frequenciesHz, rt60
       }
   });
 
+  it("gives the same map when another map is computed from inside its onProgress callback (scratch arrays are not shared with a nested call)", () => {
+    const opts = { source: [0.35, 4.6, 0.3] as [number, number, number], heightM: 1.1, gridX: 12, gridY: 10, frequenciesHz: freqs, rt60Seconds: 0.45, maxModeFrequencyHz: 300 };
+    const plain = flatnessMap(room, opts);
+    let inner: Float64Array | undefined;
+    const nested = flatnessMap(room, { ...opts, onProgress: () => { inner = flatnessMap(room, { ...opts, gridX: 3, gridY: 2 }).stdDevDb; } });
+    expect(Array.from(nested.stdDevDb)).toEqual(Array.from(plain.stdDevDb));
+    expect(Array.from(inner!)).toEqual(Array.from(flatnessMap(room, { ...opts, gridX: 3, gridY: 2 }).stdDevDb));
+  });
+
   it("reports progress in (0, 1], ending at 1, and stops with an AbortError-named Error when the signal is aborted", () => {
     const seen: number[] = [];
     flatnessMap(room, { source: [1, 1, 1], heightM: 1.2, gridX: 10, gridY: 8, frequenciesHz: freqs, rt60Seconds: 0.5, maxModeFrequencyHz: 200, onProgress: (p: number) => seen.push(p) });
