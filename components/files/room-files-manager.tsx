@@ -7,8 +7,8 @@ import type { RoomFileKind, StoredContentType } from "@/db/schema";
 import { Button } from "@/components/ui/button";
 import { EmptyState, Notice } from "@/components/ui/card";
 import { Select } from "@/components/ui/field";
-import { ACCEPTED_TYPES, formatBytes, KIND_LABEL, MAX_UPLOAD_BYTES, TYPE_LABEL } from "@/lib/storage/limits";
-import { UploadZone } from "./upload-zone";
+import { ACCEPTED_TYPES, formatBytes, KIND_LABEL, TYPE_LABEL } from "@/lib/storage/limits";
+import { type Refusal, UploadZone } from "./upload-zone";
 import { uploadFile } from "./upload-request";
 
 export interface RoomFileView {
@@ -40,18 +40,20 @@ export function RoomFilesManager({ roomId, files, uploadKinds, canCurate, isClie
   const kindLabel = (k: RoomFileKind) => (isClient && k === "client-file" ? "Your file" : KIND_LABEL[k]);
   const base = `/api/v1/rooms/${roomId}/files`;
 
-  const upload = async (chosen: File[]) => {
+  // One choice of files: those the drop zone turned away (too large, plainly another type) are shown
+  // like a server refusal; the others are sent one after the other, each with its progress.
+  const upload = async (chosen: File[], refused: Refusal[]) => {
     if (!kind) return;
-    const batch = chosen.map((f, i) => ({ file: f, key: `${Date.now()}-${i}-${f.name}` }));
-    setProgress((p) => [...p.filter((x) => !x.error && x.fraction < 1), ...batch.map(({ file, key }) => ({ key, name: file.name, fraction: 0 }))]);
+    const at = Date.now();
+    const batch = chosen.map((f, i) => ({ file: f, key: `${at}-${i}-${f.name}` }));
+    setProgress((p) => [
+      ...p.filter((x) => !x.error && x.fraction < 1),
+      ...refused.map((r, i) => ({ key: `${at}-refused-${i}-${r.name}`, name: r.name, fraction: 0, error: r.message })),
+      ...batch.map(({ file, key }) => ({ key, name: file.name, fraction: 0 })),
+    ]);
     let stored = 0;
     for (const { file, key } of batch) {
       const set = (patch: Partial<Progress>) => setProgress((p) => p.map((x) => (x.key === key ? { ...x, ...patch } : x)));
-      // Refused here already so nobody waits for 200 MB to travel; the server checks again anyway.
-      if (file.size > MAX_UPLOAD_BYTES) {
-        set({ error: `“${file.name}” is ${formatBytes(file.size)}; files may be at most ${formatBytes(MAX_UPLOAD_BYTES)}.` });
-        continue;
-      }
       const r = await uploadFile(roomId, file, kind, (fraction) => set({ fraction }));
       if (r.ok) {
         set({ fraction: 1 });
@@ -100,7 +102,7 @@ export function RoomFilesManager({ roomId, files, uploadKinds, canCurate, isClie
               </Select>
             </div>
           )}
-          <UploadZone onFiles={(f) => void upload(f)} accept={accepted.join(",")} hint={accepted.map((t) => TYPE_LABEL[t].replace(/ (image|document)$/, "")).join(", ")} />
+          <UploadZone kind={kind} onChoose={(files, refused) => void upload(files, refused)} hint={accepted.map((t) => TYPE_LABEL[t].replace(/ (image|document)$/, "")).join(", ")} />
           {progress.length > 0 && (
             <ul className="space-y-2" aria-live="polite">
               {progress.map((p) => (

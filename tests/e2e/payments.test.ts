@@ -62,7 +62,22 @@ describe("engineering fee and room files in the browser", () => {
       exe.write("MZ", 0, "latin1");
       await input.setInputFiles({ name: "holiday.jpg", mimeType: "image/jpeg", buffer: exe });
       await page.getByText("“holiday.jpg” is a Windows program, not a picture or a PDF").waitFor({ timeout: 15_000 });
+      // The drop zone (react-dropzone) turns away a plainly wrong type at once, in the server's words …
+      await input.setInputFiles({ name: "notes.txt", mimeType: "text/plain", buffer: Buffer.from("just some notes") });
+      await page.getByText("“notes.txt” is not a JPEG image, PNG image or WebP image. Export it in one of those formats and try again.").waitFor({ timeout: 10_000 });
+      // … and is reached from the keyboard: a focusable button that says what it takes.
+      const zone = page.getByRole("button", { name: /^Add files: drop them here, or press Enter to choose/ });
+      await zone.focus();
+      expect(await zone.evaluate((el) => el === document.activeElement && el.getAttribute("tabindex") === "0")).toBe(true);
       await screenshot(page, "room-files");
+      // A drawing of 12 MB passes the app's proxy whole (Next caps proxied bodies at 10 MB unless configured).
+      await page.getByLabel("Add as").selectOption("drawing");
+      const large = Buffer.alloc(12 * 1024 * 1024, 0x20);
+      large.write("%PDF-1.4\n", 0, "latin1");
+      large.write("\n%%EOF\n", large.length - 7, "latin1");
+      await input.setInputFiles({ name: "large section.pdf", mimeType: "application/pdf", buffer: large });
+      await page.locator('[data-file="large section.pdf"]').waitFor({ timeout: 60_000 });
+      await screenshot(page, "room-files-large");
     });
   });
 
