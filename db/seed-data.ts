@@ -218,3 +218,34 @@ export const DEMO_WORKSPACES: DemoWorkspace[] = [
     scenarios: [],
   },
 ];
+
+// ---------------------------------------------------------------------------------------------
+// The firm's price list for build sheets (issue 6): invented prices in the firm's currency, stock
+// sizes as a timber merchant and an insulation supplier typically sell them (common practice).
+export const DEMO_PRICE_LIST = {
+  currency: "EUR",
+  lumber: {
+    thicknessM: 0.019,
+    widthM: 0.15,
+    densityKgM3: 500,
+    basis: "per-board" as const,
+    pricePerM: 3.1,
+    boards: [
+      { lengthM: 2.4, price: 7.4 },
+      { lengthM: 3.0, price: 9.2 },
+    ],
+  },
+  kerfM: 0.003,
+  slab: {
+    standard: "metric" as const,
+    lengthM: 1.2,
+    widthM: 0.6,
+    prices: [
+      { thicknessM: 0.05, price: 3.9 },
+      { thicknessM: 0.1, price: 7.6 },
+    ],
+  },
+  fabric: { pricePerM2: 11.5, wrapM: 0.05 },
+  sheet: { lengthM: 2.44, widthM: 1.22, price: 24 },
+  fixings: { screwPrice: 0.06, cleatPrice: 4.5, bracketPrice: 2.8 },
+};

@@ -4,7 +4,8 @@ import { ARGON2_OPTIONS } from "../lib/auth/password-options";
 import { newUserId } from "../lib/auth/ids";
 import { placementIssues, positionInputSchema, scenarioInputSchema, buildInputSchema, surfacesInputSchema, treatmentItemInputSchema, positionInsideRoomIssues, openingIssues } from "../lib/schemas/workspace";
 import { recomputeRoomScenarios } from "./queries/analysis";
-import { DEMO_ACCOUNTS, DEMO_BUILDS, DEMO_FIRM, DEMO_PROJECTS, DEMO_WORKSPACES } from "./seed-data";
+import { priceListInputSchema } from "../components/build-sheet/schemas";
+import { DEMO_ACCOUNTS, DEMO_BUILDS, DEMO_FIRM, DEMO_PRICE_LIST, DEMO_PROJECTS, DEMO_WORKSPACES } from "./seed-data";
 import type { Database } from "./schema";
 
 /**
@@ -59,6 +60,7 @@ export async function seedDemo(db: Kysely<Database>): Promise<{ created: boolean
     }
     const engineerUserId = engineerId ? ids.get(engineerId) ?? null : null;
     await seedWorkspaces(trx, firm.id, engineerUserId, roomIds);
+    await seedPriceList(trx, firm.id);
     return { created: true };
   });
 }
@@ -150,4 +152,35 @@ async function seedWorkspaces(
     }
   }
   for (const room of rooms.values()) await recomputeRoomScenarios(trx, room.id);
+}
+
+/** The firm's demo price list (parsed with the settings page's schema, so the demo is always valid). */
+async function seedPriceList(trx: Transaction<Database>, firmId: string): Promise<void> {
+  const p = priceListInputSchema.parse({ ...DEMO_PRICE_LIST, version: 0 });
+  await trx
+    .insertInto("firm_price_lists")
+    .values({
+      firm_id: firmId,
+      currency: p.currency,
+      lumber_thickness_m: p.lumber.thicknessM,
+      lumber_width_m: p.lumber.widthM,
+      lumber_density_kg_m3: p.lumber.densityKgM3,
+      lumber_basis: p.lumber.basis,
+      lumber_price_per_m: p.lumber.pricePerM,
+      boards: JSON.stringify(p.lumber.boards),
+      kerf_m: p.kerfM,
+      slab_standard: p.slab.standard,
+      slab_length_m: p.slab.lengthM,
+      slab_width_m: p.slab.widthM,
+      slab_prices: JSON.stringify(p.slab.prices),
+      fabric_price_per_m2: p.fabric.pricePerM2,
+      fabric_wrap_m: p.fabric.wrapM,
+      sheet_length_m: p.sheet.lengthM,
+      sheet_width_m: p.sheet.widthM,
+      sheet_price: p.sheet.price,
+      screw_price: p.fixings.screwPrice,
+      cleat_price: p.fixings.cleatPrice,
+      bracket_price: p.fixings.bracketPrice,
+    })
+    .execute();
 }
