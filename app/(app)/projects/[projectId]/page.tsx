@@ -69,6 +69,7 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
           ))}
         </ul>
       )}
+      {await import("@/components/build-sheet/build-sheet-link").then(({ BuildSheetLink }) => <BuildSheetLink actor={actor} project={project} />)}
       <ProjectReports projectId={project.id} />
       {await import("@/components/payments/project-invoices").then(({ ProjectInvoicesPanel }) => <ProjectInvoicesPanel actor={actor} project={project} />)}
     </>
