@@ -93,7 +93,7 @@ export function analysisRoomFrom(w: Workspace, positions: PlanPosition[]): Analy
  * through TanStack Query (initial data from the server page), saves through the server actions with
  * the version read, and the conflict banner on a stale save.
  */
-export function RoomWorkspace({ roomId, initial, initialScenarios, initialBuilds, units, canSaveBuilds, roomTabFooter, designLinks }: { roomId: string; initial: Workspace; initialScenarios: Scenario[]; initialBuilds: Build[]; units: UnitSystem; canSaveBuilds: boolean; roomTabFooter?: ReactNode; designLinks?: ReactNode }) {
+export function RoomWorkspace({ roomId, initial, initialScenarios, initialBuilds, units, canSaveBuilds, roomTabFooter }: { roomId: string; initial: Workspace; initialScenarios: Scenario[]; initialBuilds: Build[]; units: UnitSystem; canSaveBuilds: boolean; roomTabFooter?: ReactNode }) {
   const router = useRouter();
   const pathname = usePathname();
   const params = useSearchParams();

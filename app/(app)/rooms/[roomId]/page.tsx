@@ -8,6 +8,7 @@ import { roomFor } from "@/db/queries/rooms";
 import { compareScenarios } from "@/db/queries/scenarios";
 import { getWorkspace } from "@/db/queries/workspace";
 import { DeleteRoomButton } from "@/components/projects/project-actions";
+import { ButtonLink } from "@/components/ui/button";
 import { Card, Notice, PageHeader } from "@/components/ui/card";
 import { RoomFilesPanel } from "@/components/files/room-files-panel";
 import { RoomWorkspace } from "@/components/workspace/room-workspace";
@@ -32,7 +33,26 @@ export default async function RoomPage({ params }: { params: Promise<{ roomId: s
     <PageHeader
       eyebrow={<Link href={`/projects/${project.id}`} className="hover:underline">{project.name}</Link>}
       title={room.name}
-      actions={canOnProject(actor, "room.delete", project) && <DeleteRoomButton roomId={room.id} projectId={project.id} name={room.name} />}
+      actions={
+        <>
+          {canOnProject(actor, "workspace.read", project) && (
+            <>
+              <ButtonLink variant="secondary" href={`/rooms/${room.id}/design`}>
+                Size treatment
+              </ButtonLink>
+              <ButtonLink variant="secondary" href={`/rooms/${room.id}/plan`}>
+                Treatment plan
+              </ButtonLink>
+            </>
+          )}
+          {canOnProject(actor, "report.compose", project) && (
+            <ButtonLink variant="secondary" href={`/rooms/${room.id}/report`}>
+              Report
+            </ButtonLink>
+          )}
+          {canOnProject(actor, "room.delete", project) && <DeleteRoomButton roomId={room.id} projectId={project.id} name={room.name} />}
+        </>
+      }
     >
       {formatLength(room.lengthM, u)} × {formatLength(room.widthM, u)} × {formatLength(room.heightM, u)} · {formatVolume(room.lengthM * room.widthM * room.heightM, u)}
     </PageHeader>
