@@ -1,3 +1,5 @@
+import { speedOfSoundFromTemperature } from "../modes/speed-of-sound";
+
 function checkTemperature(temperatureC: number): void {
   if (typeof temperatureC !== "number") throw new TypeError("temperatureC must be a number");
   if (!Number.isFinite(temperatureC) || temperatureC < -20 || temperatureC > 50) {
@@ -12,7 +14,7 @@ function checkTemperature(temperatureC: number): void {
  */
 export function speedOfSound(temperatureC: number): number {
   checkTemperature(temperatureC);
-  return 331.3 * Math.sqrt(1 + temperatureC / 273.15); // c = 331.3 √(1 + ϑ/273.15)
+  return speedOfSoundFromTemperature(temperatureC); // one formula for the whole product (lib/modes)
 }
 
 /**
