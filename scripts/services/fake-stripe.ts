@@ -273,6 +273,12 @@ export async function startFakeStripe(opts: FakeStripeOptions): Promise<FakeStri
       }
       if (method === "POST") {
         if (s.status === "open") await pay(s.id);
+        if (s.status === "expired") {
+          // Nothing to pay any more: the page says so instead of sending the client back as if paid.
+          res.writeHead(409, { "content-type": "text/html; charset=utf-8" });
+          res.end(checkoutPage(s, lineItems.get(s.id) ?? []));
+          return;
+        }
         res.writeHead(303, { location: (s.success_url ?? "/").replace("{CHECKOUT_SESSION_ID}", s.id) });
         res.end();
         return;

@@ -258,6 +258,9 @@ describe("a session that expires", () => {
     const secondId = (await invoiceRow(fresh)).checkout_session_id!;
     expect(stripe.sessions.get(secondId)).toMatchObject({ status: "open", metadata: { invoice_id: fresh } });
     expect(stripe.sessions.get(firstId)).toMatchObject({ status: "expired", url: null });
+    const late = await fetch(first.json.url, { method: "POST", redirect: "manual" });
+    expect(late.status).toBe(409);
+    expect(await late.text()).toContain("This checkout has expired.");
   });
 });
 
