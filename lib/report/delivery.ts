@@ -1,5 +1,6 @@
 import "server-only";
 import type { Kysely } from "kysely";
+import { reportDownloadGate } from "@/db/queries/invoices";
 import { findUserByEmail } from "@/db/queries/users";
 import { markIssued, recordEvent, reportSettings, revisionFor, revisionPdf, type ReportRevision } from "@/db/queries/reports";
 import { roomFor } from "@/db/queries/rooms";
@@ -19,15 +20,6 @@ import { renderReport } from "./render";
 async function firmOf(db: Kysely<Database>, firmId: string) {
   const f = await db.selectFrom("firms").select(["name", "contact_email"]).where("id", "=", firmId).executeTakeFirstOrThrow();
   return { name: f.name, contactEmail: f.contact_email };
-}
-
-/** Optional gate on downloads (e.g. "the fee is paid"); null means downloads are never held back. */
-export type DownloadGate = (db: Kysely<Database>, ctx: { reportId: string; revisionId: string; projectId: string; actor: Actor }) => Promise<{ allowed: true } | { allowed: false; message: string }>;
-let downloadGate: DownloadGate | null = null;
-
-/** Installs the download gate (the payments module sets it; staff are never gated). */
-export function setDownloadGate(gate: DownloadGate | null): void {
-  downloadGate = gate;
 }
 
 /** Renders a draft revision as an unsigned preview marked "draft" (staff only; nothing is stored). */
@@ -151,9 +143,10 @@ export async function sendRevision(
 export async function downloadRevision(db: Kysely<Database>, actor: Actor, revisionId: string): Promise<{ pdf: Buffer; filename: string; superseded: boolean }> {
   const { revision, report, project } = await revisionFor(db, actor, revisionId, "report.read-issued");
   if (revision.status === "draft") throw new AppError("bad_request", "A draft has no signed file; open its preview.");
-  if (downloadGate && actor.role === "client") {
-    const gate = await downloadGate(db, { reportId: report.id, revisionId: revision.id, projectId: project.id, actor });
-    if (!gate.allowed) throw new AppError("forbidden", gate.message);
+  // The firm may hold a client's download until the engineering fee is paid; staff are never held.
+  if (actor.role === "client") {
+    const gate = await reportDownloadGate(db, project.id, report.id);
+    if (!gate.allowed) throw new AppError("forbidden", "This report can be downloaded once the engineering fee is paid. Pay it from the project page.");
   }
   const pdf = await revisionPdf(db, revision.id);
   if (!pdf) throw new AppError("not_found", "That report revision was not found.");

@@ -4,12 +4,15 @@ import { analysisItemOf, loadAnalysisRoom } from "@/db/queries/analysis";
 import type { Project } from "@/db/queries/projects";
 import type { Report, ReportRevision } from "@/db/queries/reports";
 import type { Room } from "@/db/queries/rooms";
+import { reportPhotos } from "@/db/queries/files";
 import { compareScenarios, listScenarios } from "@/db/queries/scenarios";
 import type { Database } from "@/db/schema";
 import { analyzeScenario } from "@/lib/analysis";
 import { AppError } from "@/lib/api/errors";
 import type { Actor } from "@/lib/auth/actor";
 import { DEFAULT_TARGET } from "@/lib/schemas/workspace";
+import { loadReportPhotos } from "@/lib/storage/room-files";
+import { objectStorage } from "@/lib/storage/storage";
 import type { ReportInput, ReportScenarioInput } from "./types";
 
 /**
@@ -59,6 +62,13 @@ export async function gatherReportInput(
     before,
     scenarios: chosen,
     signature: opts.signature,
-    photos: null,
+    photos: await chosenPhotos(db, room.id),
   };
+}
+
+/** The room's photos the engineer chose for the report, as JPEG; null when none are chosen. */
+async function chosenPhotos(db: Kysely<Database>, roomId: string): Promise<ReportInput["photos"]> {
+  if ((await reportPhotos(db, roomId)).length === 0) return null;
+  const images = await loadReportPhotos(db, objectStorage(), roomId);
+  return images.map((p) => ({ caption: p.caption || p.name, data: Buffer.from(p.jpeg), format: "jpg" as const }));
 }

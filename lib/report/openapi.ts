@@ -13,5 +13,6 @@ export const REPORT_ENDPOINTS: EndpointDoc[] = [
   { method: "post", path: "/reports/revisions/{revisionId}/issue", summary: "Render, sign and issue the draft (owner, engineer); supersedes the previous revision", tag: "Reports", success: 200 },
   { method: "post", path: "/reports/revisions/{revisionId}/send", summary: "E-mail an issued revision to the client (owner, engineer); invites a client without an account", tag: "Reports", body: reportSendSchema, success: 200 },
   { method: "post", path: "/reports/revisions/{revisionId}/approve", summary: "Approve the recommendation (the project's client)", tag: "Reports", body: reportApproveSchema, success: 201 },
+  { method: "get", path: "/reports/portal/{projectId}", summary: "The link in report e-mails: signed-in members go to the project's reports, others to sign-in and back", tag: "Reports", success: 302 },
   { method: "post", path: "/verify", summary: "Public check of a report: multipart `file` (PDF) or JSON { reportNumber, sha256 } → valid / tampered / unknown", tag: "Reports", body: reportVerifySchema, success: 200, public: true },
 ];
