@@ -29,7 +29,7 @@ export function BuildSheetView({ data, canEditPrices }: { data: ProjectBuildShee
         </Notice>
       )}
 
-      <Card className="break-inside-avoid">
+      <Card className="print:bg-white">
         <h2 className="mb-2 text-lg font-semibold">Items on site</h2>
         {data.rooms.map((room) => (
           <div key={room.id} className="mb-4 last:mb-0">
@@ -62,7 +62,7 @@ export function BuildSheetView({ data, canEditPrices }: { data: ProjectBuildShee
                       <td className={`${td} text-right tabular-nums`}>{it.count}</td>
                       <td className={td} data-testid="built-cell">
                         {it.progress.builtOn ? (
-                          <span className="inline-flex items-center gap-1">
+                          <span className="inline-flex flex-wrap items-center gap-1 whitespace-nowrap">
                             <Tick /> {it.progress.builtOn}
                             {it.progress.builtByName ? <span className="text-xs text-ink-soft">by {it.progress.builtByName}</span> : null}
                           </span>
@@ -72,7 +72,7 @@ export function BuildSheetView({ data, canEditPrices }: { data: ProjectBuildShee
                       </td>
                       <td className={td}>
                         {it.progress.installedOn ? (
-                          <span className="inline-flex items-center gap-1">
+                          <span className="inline-flex flex-wrap items-center gap-1 whitespace-nowrap">
                             <Tick /> {it.progress.installedOn}
                             {it.progress.installedByName ? <span className="text-xs text-ink-soft">by {it.progress.installedByName}</span> : null}
                           </span>
@@ -105,7 +105,7 @@ export function BuildSheetView({ data, canEditPrices }: { data: ProjectBuildShee
             const g = data.groups[i]!;
             const raw = sheet.builds[i]!;
             return (
-              <section key={i} className="build-type rounded-[10px] border border-paper-line bg-paper-raised p-5 print:break-before-page print:border-0 print:p-0" aria-labelledby={`bt-${i}`} data-testid="build-type">
+              <section key={i} className="build-type rounded-[10px] border border-paper-line bg-paper-raised p-5 print:break-before-page print:border-0 print:bg-white print:p-0" aria-labelledby={`bt-${i}`} data-testid="build-type">
                 <h2 id={`bt-${i}`} className="text-lg font-semibold">
                   Build type {i + 1}: {describeBuild(g.build)}
                 </h2>
@@ -174,11 +174,11 @@ export function BuildSheetView({ data, canEditPrices }: { data: ProjectBuildShee
             );
           })}
 
-          <section className="rounded-[10px] border border-paper-line bg-paper-raised p-5 print:break-before-page print:border-0 print:p-0" aria-labelledby="boards-title">
+          <section className="rounded-[10px] border border-paper-line bg-paper-raised p-5 print:break-before-page print:border-0 print:bg-white print:p-0" aria-labelledby="boards-title">
             <h2 id="boards-title" className="text-lg font-semibold">
               Cutting the boards
             </h2>
-            <p className="mb-2 text-xs text-ink-faint">{sheet.cutPlan.method}</p>
+            <p className="mb-2 text-xs text-ink-faint">Pieces are packed longest first into the first board with room for them (one saw kerf per cut); each board is then cut from the shortest stock length that holds its pieces. Keep the offcuts for cleats and battens.</p>
             <ol className="grid gap-1 text-sm md:grid-cols-2 print:grid-cols-2">
               {p.boards.map((board, k) => (
                 <li key={k} className="break-inside-avoid border-t border-paper-line py-1">
@@ -191,7 +191,7 @@ export function BuildSheetView({ data, canEditPrices }: { data: ProjectBuildShee
             </ol>
           </section>
 
-          <section className="break-inside-avoid rounded-[10px] border border-paper-line bg-paper-raised p-5 print:border-0 print:p-0" aria-labelledby="totals-title" data-testid="job-totals">
+          <section className="break-inside-avoid rounded-[10px] border border-paper-line bg-paper-raised p-5 print:border-0 print:bg-white print:p-0" aria-labelledby="totals-title" data-testid="job-totals">
             <h2 id="totals-title" className="text-lg font-semibold">
               Totals for the job
             </h2>

@@ -43,7 +43,7 @@ export function AddToScenario({ roomId, items, scenarios, fromScenario, suggeste
   return (
     <div className="space-y-2 rounded-md border border-paper-line bg-paper-sunk/60 p-3 text-sm" data-testid={testId}>
       <div className="flex flex-wrap items-end gap-2">
-        <label className="block min-w-48 flex-1 space-y-1">
+        <label className="block min-w-72 flex-[2] space-y-1">
           <span className="font-medium">Into</span>
           <Select value={into} onChange={(e) => setInto(e.target.value)} aria-label="Scenario to add to">
             <option value="new">A new scenario{fromScenario ? ` (copy of “${fromScenario.name}”)` : ""}</option>

@@ -10,7 +10,7 @@ const money = (x: number) => x.toLocaleString("en-GB", { minimumFractionDigits: 
 
 function where(p: Placement): string {
   if (p.kind === "corner") return p.corner.endsWith("-ceiling") ? `${p.corner.replace("-ceiling", "")} wall–ceiling edge` : `${p.corner} corner`;
-  return `${SURFACE[p.surface]} at u ${p.uM.toFixed(2)}, v ${p.vM.toFixed(2)} m`;
+  return `${SURFACE[p.surface]} (${p.uM.toFixed(2)}, ${p.vM.toFixed(2)})`;
 }
 
 function face(i: TreatmentItem): string {
@@ -90,7 +90,7 @@ export function PlanTable({ items, byItem, bandsHz, addedM2, progress }: { items
         </tfoot>
       </table>
       <p className="mt-1 text-xs text-ink-faint">
-        Absorption areas are Sabine areas from the room&apos;s stored analysis (lib/analysis); membrane and perforated traps are estimates. Coordinates: u and v in the surface&apos;s own frame, to the centre of the face.{unknownMass ? " +: some items have no weight given." : ""}
+        Absorption areas are Sabine areas from the scenario&apos;s analysis; membrane and perforated traps are estimates. Places on a surface are (u, v) in metres to the centre of the face: along the wall and up from the floor on walls, x and y on the floor and ceiling.{unknownMass ? " +: some items have no weight given." : ""}
       </p>
     </div>
   );

@@ -78,9 +78,12 @@ export function ReflectionsPanel({ roomId, room, openings, speakers, seats, scen
                 </tr>
               </thead>
               <tbody>
-                {data.panels.map((p, i) => (
+                {data.panels.filter((p) => p.count > 0).map((p, i) => (
                   <tr key={i} className="border-t border-paper-line">
-                    <td className="py-1 pr-3">{SURFACE_WORD[p.surface]}</td>
+                    <td className="py-1 pr-3">
+                      {SURFACE_WORD[p.surface]}
+                      {data.panels.filter((q) => q.surface === p.surface && q.count > 0).length > 1 && <span className="block text-xs text-ink-faint">for {p.zone.speakerIds.join(" and ")}</span>}
+                    </td>
                     <td className="py-1 pr-3 text-right tabular-nums">{p.count}</td>
                     <td className="py-1 pr-3 tabular-nums">
                       {p.columns} × {p.rows}

@@ -13,6 +13,8 @@ const PLACE: Record<string, string> = { "vertical-corner": "corner", "ceiling-ed
 /** The sizer's proposal: the set, RT per band before/after vs target, the bass at the main seat, why, and the low-frequency caveat. */
 export function SizerResultView({ result, elapsedMs }: { result: SizerResult; elapsedMs: number }) {
   const sized = result.bands.filter((b) => b.sized);
+  const worst = sized.reduce((w, b) => (b.missingM2 > (w?.missingM2 ?? 0) ? b : w), undefined as (typeof sized)[number] | undefined);
+  const nearlyReached = !result.reached && worst !== undefined && worst.missingM2 < 0.05;
   return (
     <div className="space-y-5">
       <div className="flex flex-wrap items-baseline justify-between gap-2">
@@ -21,6 +23,8 @@ export function SizerResultView({ result, elapsedMs }: { result: SizerResult; el
             ? "Nothing within these limits helps the low end."
             : result.reached
               ? `${result.totals.count} item${result.totals.count === 1 ? "" : "s"} bring 63–250 Hz to the target.`
+              : nearlyReached
+                ? `${result.totals.count} items bring 63–250 Hz to the target, short by under 0.05 m² at ${worst!.nominalHz} Hz — within the rounding of these estimates.`
               : `${result.totals.count} item${result.totals.count === 1 ? "" : "s"} get as close as these limits allow; the target is not reached.`}
         </p>
         <span className="text-xs text-ink-faint" data-testid="sizer-elapsed">
@@ -75,15 +79,6 @@ export function SizerResultView({ result, elapsedMs }: { result: SizerResult; el
             <li key={i}>{r}</li>
           ))}
         </ul>
-        {result.binding.length > 0 && (
-          <ul className="space-y-1 text-sm text-ink-soft">
-            {result.binding.map((b, i) => (
-              <li key={i}>
-                <span className="font-medium text-ink">Limit:</span> {b.message}
-              </li>
-            ))}
-          </ul>
-        )}
       </section>
 
       <div className="grid gap-5 lg:grid-cols-2">

@@ -86,11 +86,14 @@ export default async function PlanPage({ params, searchParams }: { params: Promi
         )}
         {scenario.results.cautions.length > 0 && (
           <ul className="space-y-1 text-sm" aria-label="Cautions for these items">
-            {scenario.results.cautions.map((c, i) => (
-              <li key={i} className="text-ink-soft">
-                <span className="font-medium text-ink">{scenario.items.find((it) => it.id === c.itemId)?.name ?? "All items"}:</span> {c.message}
-              </li>
-            ))}
+            {[...new Set(scenario.results.cautions.map((c) => c.message))].map((message) => {
+              const names = scenario.results.cautions.filter((c) => c.message === message).map((c) => scenario.items.find((it) => it.id === c.itemId)?.name ?? "all items");
+              return (
+                <li key={message} className="text-ink-soft">
+                  <span className="font-medium text-ink">{[...new Set(names)].join(", ")}:</span> {message}
+                </li>
+              );
+            })}
           </ul>
         )}
       </Card>
