@@ -329,7 +329,7 @@ export interface PaymentEventsTable {
   received_at: Timestamp;
 }
 
-// Build sheet and site progress (migration 2026-12-01T21-15-build-progress).
+// Build sheet and site progress (migration 2026-12-01T21-45-build-progress).
 export interface FirmPriceListsTable {
   firm_id: string;
   currency: Defaulted<string>;

@@ -4,7 +4,7 @@ import { ARGON2_OPTIONS } from "../lib/auth/password-options";
 import { newUserId } from "../lib/auth/ids";
 import { placementIssues, positionInputSchema, scenarioInputSchema, buildInputSchema, surfacesInputSchema, treatmentItemInputSchema, positionInsideRoomIssues, openingIssues } from "../lib/schemas/workspace";
 import { recomputeRoomScenarios } from "./queries/analysis";
-import { priceListInputSchema } from "../components/build-sheet/schemas";
+import { priceListInputSchema } from "../lib/schemas/build-sheet";
 import { DEMO_ACCOUNTS, DEMO_BUILDS, DEMO_FIRM, DEMO_PRICE_LIST, DEMO_PROJECTS, DEMO_WORKSPACES } from "./seed-data";
 import type { Database } from "./schema";
 

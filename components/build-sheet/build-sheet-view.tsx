@@ -3,7 +3,7 @@ import type { ProjectBuildSheet } from "@/db/queries/build-progress";
 import { presentLength } from "@/lib/build-sheet";
 import { Card, Notice } from "@/components/ui/card";
 import { CautionsBlock } from "./cautions-block";
-import { describeBuild } from "./job";
+import { describeBuild } from "@/lib/build-sheet/job-from-items";
 import { ProgressControls } from "./progress-controls";
 
 const th = "py-1 pr-3 text-left text-xs font-medium uppercase tracking-wide text-ink-faint";

@@ -7,7 +7,7 @@ import { savePriceListAction } from "@/app/(app)/settings/prices/actions";
 import { Button } from "@/components/ui/button";
 import { Card } from "@/components/ui/card";
 import { Input, Select } from "@/components/ui/field";
-import { SLAB_PRESETS, type PriceListValues } from "./schemas";
+import { SLAB_PRESETS, type PriceListValues } from "@/lib/schemas/build-sheet";
 
 type Errors = Record<string, string[]>;
 const toMm = (m: number) => Math.round(m * 10_000) / 10;

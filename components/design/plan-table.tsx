@@ -2,7 +2,7 @@ import type { ItemProgress } from "@/db/queries/build-progress";
 import type { TreatmentItem } from "@/db/queries/analysis";
 import type { ItemResult } from "@/lib/analysis";
 import type { Placement } from "@/lib/schemas/workspace";
-import { describeBuild, itemBuild } from "@/components/build-sheet/job";
+import { describeBuild, itemBuild } from "@/lib/build-sheet/job-from-items";
 
 const fmtHz = (f: number) => (f >= 1000 ? `${f / 1000}k` : String(f));
 const SURFACE: Record<string, string> = { front: "front wall", rear: "rear wall", left: "left wall", right: "right wall", floor: "floor", ceiling: "ceiling" };

@@ -1,6 +1,6 @@
 import { sql } from "kysely";
-import { groupItems, jobOf, EMPTY_PRICE_LIST, type JobGroup } from "@/components/build-sheet/job";
-import type { ProgressInput } from "@/components/build-sheet/schemas";
+import { groupItems, jobOf, EMPTY_PRICE_LIST, type JobGroup } from "@/lib/build-sheet/job-from-items";
+import type { ProgressInput } from "@/lib/schemas/build-sheet";
 import { AppError, forbidden, notFound } from "@/lib/api/errors";
 import type { Actor } from "@/lib/auth/actor";
 import { canOnProject } from "@/lib/auth/permissions";

@@ -1,5 +1,5 @@
 import { sql } from "kysely";
-import type { PriceListInput, PriceListValues } from "@/components/build-sheet/schemas";
+import type { PriceListInput, PriceListValues } from "@/lib/schemas/build-sheet";
 import { AppError, conflict, forbidden } from "@/lib/api/errors";
 import type { Actor } from "@/lib/auth/actor";
 import { canInFirm } from "@/lib/auth/permissions";

@@ -1,4 +1,4 @@
-import { priceListInputSchema, progressInputSchema } from "@/components/build-sheet/schemas";
+import { priceListInputSchema, progressInputSchema } from "@/lib/schemas/build-sheet";
 import type { EndpointDoc } from "./openapi";
 
 /** Build sheet, price list and site progress endpoints. */

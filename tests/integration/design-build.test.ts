@@ -10,7 +10,7 @@ import { savePriceListAction } from "@/app/(app)/settings/prices/actions";
 import * as sheetRoute from "@/app/api/v1/projects/[projectId]/build-sheet/route";
 import * as priceRoute from "@/app/api/v1/price-list/route";
 import * as progressRoute from "@/app/api/v1/treatment-items/[itemId]/progress/route";
-import { groupItems, jobOf } from "@/components/build-sheet/job";
+import { groupItems, jobOf } from "@/lib/build-sheet/job-from-items";
 import { proposalItems } from "@/components/design/proposal-items";
 import { loadItems } from "@/db/queries/analysis";
 import { DEMO_PRICE_LIST } from "@/db/seed-data";

@@ -4,7 +4,7 @@
 // typed result.
 
 import { revalidatePath } from "next/cache";
-import { priceListInputSchema } from "@/components/build-sheet/schemas";
+import { priceListInputSchema } from "@/lib/schemas/build-sheet";
 import { db } from "@/db/client";
 import { savePriceList } from "@/db/queries/price-lists";
 import { AppError } from "@/lib/api/errors";

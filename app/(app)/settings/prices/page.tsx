@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { db } from "@/db/client";
 import { getPriceList } from "@/db/queries/price-lists";
-import { EMPTY_PRICE_LIST } from "@/components/build-sheet/job";
+import { EMPTY_PRICE_LIST } from "@/lib/build-sheet/job-from-items";
 import { PriceListForm } from "@/components/build-sheet/price-list-form";
 import { PageHeader } from "@/components/ui/card";
 import { canInFirm } from "@/lib/auth/permissions";

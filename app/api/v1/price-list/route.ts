@@ -1,4 +1,4 @@
-import { priceListInputSchema } from "@/components/build-sheet/schemas";
+import { priceListInputSchema } from "@/lib/schemas/build-sheet";
 import { db } from "@/db/client";
 import { getPriceList, savePriceList } from "@/db/queries/price-lists";
 import { apiRoute, readJson } from "@/lib/api/route";

@@ -4,7 +4,7 @@
 // (build.mark-done, inside the query) → zod → query → revalidate → typed result.
 
 import { revalidatePath } from "next/cache";
-import { progressInputSchema } from "@/components/build-sheet/schemas";
+import { progressInputSchema } from "@/lib/schemas/build-sheet";
 import { db } from "@/db/client";
 import { markProgress, type ItemProgress } from "@/db/queries/build-progress";
 import { AppError } from "@/lib/api/errors";

@@ -1,4 +1,4 @@
-import { progressInputSchema } from "@/components/build-sheet/schemas";
+import { progressInputSchema } from "@/lib/schemas/build-sheet";
 import { db } from "@/db/client";
 import { markProgress } from "@/db/queries/build-progress";
 import { apiRoute, readJson } from "@/lib/api/route";

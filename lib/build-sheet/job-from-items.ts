@@ -7,7 +7,7 @@
 import { frameDepthM, type Build, type BuildSheetJob } from "@/lib/build-sheet";
 import { porousMaterial } from "@/lib/porous";
 import type { ItemSpec } from "@/lib/schemas/workspace";
-import type { PriceListValues } from "./schemas";
+import type { PriceListValues } from "@/lib/schemas/build-sheet";
 
 /** Face sheet of a membrane or perforated trap: fibreboard of 750 kg/m³ (from memory: MDF 700–800 kg/m³). */
 export const FACE_BOARD_DENSITY_KG_M3 = 750;
