@@ -173,6 +173,7 @@ export function navigationFor(actor: Actor): { href: string; label: string }[] {
   const items = [{ href: "/projects", label: actor.role === "client" ? "My projects" : actor.role === "builder" ? "My jobs" : "Projects" }];
   if (canInFirm(actor, "member.list")) items.push({ href: "/members", label: "Team" });
   if (canInFirm(actor, "fee.manage")) items.push({ href: "/settings/fees", label: "Fees" });
+  if (canInFirm(actor, "price-list.manage")) items.push({ href: "/settings/prices", label: "Prices" });
   if (canInFirm(actor, "outbox.read")) items.push({ href: "/dev/outbox", label: "Outbox" });
   return items;
 }

@@ -29,7 +29,7 @@ async function navLabels(page: Page): Promise<string[]> {
 
 describe("each demo role sees its own navigation", () => {
   const cases: [number, string[], string][] = [
-    [0, ["Projects", "Team", "Fees", "Outbox"], "owner"],
+    [0, ["Projects", "Team", "Fees", "Prices", "Outbox"], "owner"],
     [1, ["Projects", "Team"], "engineer"],
     [2, ["My jobs"], "builder"],
     [3, ["My projects"], "client"],

@@ -4,6 +4,8 @@ import { notFound } from "next/navigation";
 import { db } from "@/db/client";
 import { findProject } from "@/db/queries/projects";
 import { listRooms } from "@/db/queries/rooms";
+import { BuildSheetLink } from "@/components/build-sheet/build-sheet-link";
+import { ProjectInvoicesPanel } from "@/components/payments/project-invoices";
 import { ProjectReports } from "@/components/reports/project-reports";
 import { DeleteProjectButton } from "@/components/projects/project-actions";
 import { ButtonLink } from "@/components/ui/button";
@@ -69,9 +71,9 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
           ))}
         </ul>
       )}
-      {await import("@/components/build-sheet/build-sheet-link").then(({ BuildSheetLink }) => <BuildSheetLink actor={actor} project={project} />)}
+      <BuildSheetLink actor={actor} project={project} />
       <ProjectReports projectId={project.id} />
-      {await import("@/components/payments/project-invoices").then(({ ProjectInvoicesPanel }) => <ProjectInvoicesPanel actor={actor} project={project} />)}
+      <ProjectInvoicesPanel actor={actor} project={project} />
     </>
   );
 }
