@@ -5,7 +5,8 @@ import { join } from "node:path";
 // DEVELOPERS.md / STYLE.md: lib/<topic> imports nothing from React, Next, db/ or the DOM, and nothing
 // Node-only, so the same code runs in a Web Worker, a route handler and a PDF renderer.
 const ROOT = join(__dirname, "..", "..", "..");
-const ALLOWED = /^(\.\/|\.\.\/|@\/lib\/(porous|reverb|modes|complex|build-sheet|reflections|sizer)$|zod$)/;
+// lib/schemas holds the zod schemas shared by forms and the API: pure as well.
+const ALLOWED = /^(\.\/|\.\.\/|@\/lib\/(porous|reverb|modes|complex|build-sheet|reflections|sizer)$|@\/lib\/schemas\/[\w-]+$|zod$)/;
 
 describe("lib/sizer, lib/reflections, lib/build-sheet — portable imports only", () => {
   for (const dir of ["lib/sizer", "lib/reflections", "lib/build-sheet"]) {
