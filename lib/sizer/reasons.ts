@@ -9,6 +9,8 @@ export function describeCount(n: number): string {
 }
 
 const m2 = (x: number) => `${x.toFixed(1)} m²`;
+/** A shortfall never prints as "0.0 m²": small ones keep two decimals, tiny ones say so. */
+const shortfall = (x: number) => (x >= 0.05 ? m2(x) : x >= 0.005 ? `${x.toFixed(2)} m²` : "under 0.01 m²");
 const s = (x: number) => `${x.toFixed(2)} s`;
 const mm = (x: number) => `${Math.round(x * 1000)} mm`;
 
@@ -92,7 +94,7 @@ export function explain(ctx: {
       const short = sizedIdx.filter((b) => bands[b]!.missingM2 > 1e-9).map((b) => `${bands[b]!.nominalHz} Hz`);
       binding.push({ limit: "catalogue", message: `the allowed builds add too little at ${short.join(", ")} for any count within the limits` });
     }
-    const missing = sizedIdx.filter((b) => bands[b]!.missingM2 > 1e-9).map((b) => `${m2(bands[b]!.missingM2)} at ${bands[b]!.nominalHz} Hz`);
+    const missing = sizedIdx.filter((b) => bands[b]!.missingM2 > 1e-9).map((b) => `${shortfall(bands[b]!.missingM2)} at ${bands[b]!.nominalHz} Hz`);
     reasons.push(`the aim is not reached: still missing ${missing.join(", ")}; limiting: ${binding.map((x) => x.message).join("; ")}`);
   }
   return { reasons, binding };
