@@ -33,7 +33,16 @@ export async function readJson<S extends z.ZodType>(request: Request, schema: S)
   }
   const declared = Number(request.headers.get("content-length") ?? "0");
   if (declared > MAX_JSON_BYTES) throw new AppError("payload_too_large", `The body is larger than ${MAX_JSON_BYTES} bytes.`);
+  return parseJsonText(await request.text(), schema);
+}
+
+/** A JSON body that may be left out (an empty body → undefined); otherwise as `readJson`. */
+export async function readOptionalJson<S extends z.ZodType>(request: Request, schema: S): Promise<z.infer<S> | undefined> {
   const text = await request.text();
+  return text.trim() === "" ? undefined : parseJsonText(text, schema);
+}
+
+function parseJsonText<S extends z.ZodType>(text: string, schema: S): z.infer<S> {
   if (text.length > MAX_JSON_BYTES) throw new AppError("payload_too_large", `The body is larger than ${MAX_JSON_BYTES} bytes.`);
   let data: unknown;
   try {

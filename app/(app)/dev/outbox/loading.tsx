@@ -1,10 +1,5 @@
-export default function Loading() {
-  return (
-    <div role="status" aria-live="polite" className="animate-pulse space-y-4">
-      <div className="h-7 w-64 rounded bg-paper-sunk" />
-      <div className="h-4 w-96 max-w-full rounded bg-paper-sunk" />
-      <div className="h-40 rounded-[10px] bg-paper-sunk" />
-      <span className="sr-only">Loading…</span>
-    </div>
-  );
-}
+// Leaf segments only: a loading boundary above a page that can answer notFound() would turn its
+// 404 status into a streamed 200.
+import { PageSkeleton } from "@/components/ui/page-skeleton";
+
+export default PageSkeleton;

@@ -1,7 +1,6 @@
 import { db } from "@/db/client";
 import { approveRevision } from "@/db/queries/reports";
-import { apiRoute } from "@/lib/api/route";
-import { readOptionalJson } from "@/lib/report/optional-json";
+import { apiRoute, readOptionalJson } from "@/lib/api/route";
 import { reportApproveSchema } from "@/lib/report/schemas";
 
 type P = { revisionId: string };

@@ -1,6 +1,5 @@
 import { db } from "@/db/client";
-import { apiRoute } from "@/lib/api/route";
-import { readOptionalJson } from "@/lib/report/optional-json";
+import { apiRoute, readOptionalJson } from "@/lib/api/route";
 import { sendRevision } from "@/lib/report/delivery";
 import { reportSendSchema } from "@/lib/report/schemas";
 
