@@ -29,6 +29,45 @@ export const tableFeatureSet = tableFeatures({
 });
 export type TableFeatureSet = typeof tableFeatureSet;
 
+/** The table instance as the header needs it (any TanStack Table v9 table with row sorting). */
+interface SortableTable {
+  getHeaderGroups(): { id: string; headers: SortableHeader[] }[];
+  FlexRender: (props: { header: never }) => ReactNode;
+}
+interface SortableHeader {
+  id: string;
+  isPlaceholder: boolean;
+  column: { getIsSorted(): false | "asc" | "desc"; getCanSort(): boolean; getToggleSortingHandler(): ((event: unknown) => void) | undefined };
+}
+
+/** Column headers that sort on click (buttons, so keyboard users sort too), with aria-sort. */
+export function SortableHead({ table, className }: { table: SortableTable; className?: string }) {
+  const Render = table.FlexRender as (props: { header: SortableHeader }) => ReactNode;
+  return (
+    <thead className={className}>
+      {table.getHeaderGroups().map((group) => (
+        <tr key={group.id}>
+          {group.headers.map((header) => {
+            const sorted = header.column.getIsSorted();
+            return (
+              <th key={header.id} scope="col" aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : undefined} className="px-3 py-2 font-medium">
+                {header.isPlaceholder ? null : header.column.getCanSort() ? (
+                  <button type="button" onClick={header.column.getToggleSortingHandler()} className="inline-flex items-center gap-1 hover:text-ink">
+                    <Render header={header} />
+                    {sorted === "asc" ? <ArrowUp className="h-3 w-3" aria-hidden /> : sorted === "desc" ? <ArrowDown className="h-3 w-3" aria-hidden /> : <ArrowUpDown className="h-3 w-3 opacity-40" aria-hidden />}
+                  </button>
+                ) : (
+                  <Render header={header} />
+                )}
+              </th>
+            );
+          })}
+        </tr>
+      ))}
+    </thead>
+  );
+}
+
 /**
  * A sortable, searchable table (TanStack Table v9). Columns and data must be stable (module scope
  * or memoised). Header buttons sort; the search box filters over every text column.
@@ -67,28 +106,7 @@ export function DataTable<T extends object>({
       <div className="overflow-x-auto rounded-[10px] border border-paper-line bg-paper-raised">
         <table className="w-full border-collapse text-sm">
           {caption && <caption className="sr-only">{caption}</caption>}
-          <thead className="bg-paper-sunk/70 text-left text-xs uppercase tracking-wide text-ink-soft">
-            {table.getHeaderGroups().map((group) => (
-              <tr key={group.id}>
-                {group.headers.map((header) => {
-                  const sorted = header.column.getIsSorted();
-                  const canSort = header.column.getCanSort();
-                  return (
-                    <th key={header.id} scope="col" aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : undefined} className="px-3 py-2 font-medium">
-                      {header.isPlaceholder ? null : canSort ? (
-                        <button type="button" onClick={header.column.getToggleSortingHandler()} className="inline-flex items-center gap-1 uppercase hover:text-ink">
-                          <table.FlexRender header={header} />
-                          {sorted === "asc" ? <ArrowUp className="h-3 w-3" aria-hidden /> : sorted === "desc" ? <ArrowDown className="h-3 w-3" aria-hidden /> : <ArrowUpDown className="h-3 w-3 opacity-40" aria-hidden />}
-                        </button>
-                      ) : (
-                        <table.FlexRender header={header} />
-                      )}
-                    </th>
-                  );
-                })}
-              </tr>
-            ))}
-          </thead>
+          <SortableHead table={table} className="bg-paper-sunk/70 text-left text-xs uppercase tracking-wide text-ink-soft" />
           <tbody>
             {rows.map((row) => (
               <tr key={row.id} className="border-t border-paper-line/70 hover:bg-kiln-50/40">

@@ -14,8 +14,9 @@ import {
   type FilterFn,
   type SortingState,
 } from "@tanstack/react-table";
-import { ArrowDown, ArrowUp, ArrowUpDown, Layers, MoveHorizontal } from "lucide-react";
+import { Layers, MoveHorizontal } from "lucide-react";
 import { useMemo, useState } from "react";
+import { SortableHead } from "@/components/ui/data-table";
 import type { ScenarioResults } from "@/lib/analysis";
 
 type ModeRow = ScenarioResults["modes"]["table"][number] & { index: string; gapBelowHz: number | null };
@@ -111,27 +112,7 @@ export function ModeTable({ modes }: { modes: ScenarioResults["modes"] }) {
       <div className="max-h-[28rem] overflow-auto rounded-[10px] border border-paper-line bg-paper-raised print:max-h-none">
         <table className="w-full border-collapse text-sm">
           <caption className="sr-only">Room modes, sortable; coincidences and wide gaps flagged</caption>
-          <thead className="sticky top-0 bg-paper-sunk text-left text-xs tracking-wide text-ink-soft">
-            {table.getHeaderGroups().map((g) => (
-              <tr key={g.id}>
-                {g.headers.map((h) => {
-                  const sorted = h.column.getIsSorted();
-                  return (
-                    <th key={h.id} scope="col" aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : undefined} className="px-3 py-2 font-medium">
-                      {h.column.getCanSort() ? (
-                        <button type="button" onClick={h.column.getToggleSortingHandler()} className="inline-flex items-center gap-1 hover:text-ink">
-                          <table.FlexRender header={h} />
-                          {sorted === "asc" ? <ArrowUp className="h-3 w-3" aria-hidden /> : sorted === "desc" ? <ArrowDown className="h-3 w-3" aria-hidden /> : <ArrowUpDown className="h-3 w-3 opacity-40" aria-hidden />}
-                        </button>
-                      ) : (
-                        <table.FlexRender header={h} />
-                      )}
-                    </th>
-                  );
-                })}
-              </tr>
-            ))}
-          </thead>
+          <SortableHead table={table} className="sticky top-0 bg-paper-sunk text-left text-xs tracking-wide text-ink-soft" />
           <tbody>
             {rows.map((row) => (
               <tr key={row.id} className={`border-t border-paper-line/70 ${row.original.kind === "axial" ? "font-medium" : ""}`}>

@@ -56,7 +56,7 @@ export function modeTable(
   const nCo = rows.filter((r) => r.coincident).length;
   const f1 = (v: number) => v.toFixed(1);
   const verdict =
-    `${rows.length} modes up to ${f1(options.maxFrequencyHz)} Hz, each about ${f1(B)} Hz wide at RT60 ${options.rt60Seconds} s. ` +
+    `${rows.length} modes up to ${f1(options.maxFrequencyHz)} Hz, each about ${f1(B)} Hz wide at RT60 ${options.rt60Seconds.toFixed(2)} s. ` +
     (nCo ? `${nCo} overlap a neighbour (closer than ${f1(B)} Hz) and pile up into stronger peaks. ` : "No two modes overlap. ") +
     (wideGaps.length
       ? `${wideGaps.length} gap(s) wider than ${f1(wideGapHz)} Hz, where the bass may sound thin: ${wideGaps.map((g) => `${f1(g.fromHz)}-${f1(g.toHz)} Hz`).join(", ")}.`
