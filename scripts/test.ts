@@ -184,6 +184,26 @@ async function finish(code: number): Promise<never> {
   process.exit(code);
 }
 
+// Each vitest run also writes a JSON report; their counts make the closing "N passed, N failed" line.
+const counts = { passed: 0, failed: 0, skipped: 0 };
+function vitestReportArgs(phaseName: string): string[] {
+  const file = path.join(root, ".data", `vitest-${phaseName}.json`);
+  fs.mkdirSync(path.dirname(file), { recursive: true });
+  fs.rmSync(file, { force: true });
+  return ["--reporter=default", "--reporter=json", `--outputFile.json=${file}`];
+}
+function addCounts(phaseName: string): void {
+  const file = path.join(root, ".data", `vitest-${phaseName}.json`);
+  try {
+    const r = JSON.parse(fs.readFileSync(file, "utf8")) as { numPassedTests?: number; numFailedTests?: number; numPendingTests?: number; numTodoTests?: number };
+    counts.passed += r.numPassedTests ?? 0;
+    counts.failed += r.numFailedTests ?? 0;
+    counts.skipped += (r.numPendingTests ?? 0) + (r.numTodoTests ?? 0);
+  } catch {
+    // vitest did not get as far as writing its report; the phase itself reports the failure.
+  }
+}
+
 function printSummary(code: number): void {
   const width = Math.max(...phases.map((p) => p.name.length));
   console.log("\n  phase".padEnd(width + 4) + "   time      result");
@@ -191,6 +211,7 @@ function printSummary(code: number): void {
     console.log(`  ${p.name.padEnd(width)}  ${seconds(p.ms).padStart(8)}   ${p.outcome}${p.note ? ` — ${p.note}` : ""}`);
   }
   console.log(`  ${"total".padEnd(width)}  ${seconds(Date.now() - tStart).padStart(8)}   ${code === 0 ? "PASSED" : "FAILED"}\n`);
+  console.log(`${counts.passed} passed, ${counts.failed} failed${counts.skipped ? `, ${counts.skipped} skipped` : ""}`);
 }
 
 process.on("SIGINT", () => {
@@ -277,8 +298,9 @@ async function main(): Promise<number> {
     const name = `vitest ${fast.join(" + ")}`;
     ok =
       (await phase(name, async () => {
-        const args = ["run", ...fast.flatMap((p) => ["--project", p]), ...new Set(fast.flatMap((p) => paths[p])), ...extra, ...passWithNoTests];
+        const args = ["run", ...fast.flatMap((p) => ["--project", p]), ...new Set(fast.flatMap((p) => paths[p])), ...extra, ...passWithNoTests, ...vitestReportArgs("fast")];
         const code = await runToEnd("vitest", vitestBin, args, { cwd: root, env: { ...testEnv, NODE_ENV: "test" } });
+        addCounts("fast");
         return code === 0 ? { outcome: "passed" } : { outcome: "failed", note: `vitest exit ${code}` };
       })) && ok;
   }
@@ -321,8 +343,9 @@ async function main(): Promise<number> {
 
   ok =
     (await phase("vitest e2e", async () => {
-      const args = ["run", "--project", "e2e", ...paths.e2e, ...extra, ...passWithNoTests];
+      const args = ["run", "--project", "e2e", ...paths.e2e, ...extra, ...passWithNoTests, ...vitestReportArgs("e2e")];
       const code = await runToEnd("vitest", vitestBin, args, { cwd: root, env: { ...testEnv, NODE_ENV: "test" } });
+      addCounts("e2e");
       return code === 0 ? { outcome: "passed" } : { outcome: "failed", note: `vitest exit ${code}` };
     })) && ok;
   return ok ? 0 : 1;
