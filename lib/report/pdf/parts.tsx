@@ -9,7 +9,7 @@ export function Table({ t, widths }: { t: ReportTable; widths?: number[] }) {
   const cell = (i: number) => ({ flex: w[i] ?? 1, ...(t.numeric[i] ? s.num : {}) });
   return (
     <View style={{ marginBottom: 8 }}>
-      <View style={s.tableHead} wrap={false} minPresenceAhead={40}>
+      <View style={s.tableHead} wrap={false} minPresenceAhead={40} fixed>
         {t.columns.map((c, i) => (
           <Text key={i} style={[s.th, cell(i)]}>
             {c}
