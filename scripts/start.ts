@@ -9,9 +9,10 @@ import { DEMO_ACCOUNTS } from "../db/seed-data";
 import { ensureDevCertificate } from "./services/dev-certificate";
 import { startFakeSmtp, type FakeSmtpHandle } from "./services/fake-smtp";
 import { startLocalProviders, type LocalProviders } from "./services/local-providers";
+import { stopServices } from "./services/stop-services";
 import { buildFingerprint, buildIsCurrent, forgetBuild, recordBuild } from "./services/next-build";
 import { createDatabaseIfMissing, ensurePostgres, portIsFree, type PostgresHandle } from "./services/postgres";
-import { type ManagedChild, reapOrphans, runToEnd, seconds, spawnManaged, stopAllChildren, trackChildrenIn, waitForHttp } from "./services/processes";
+import { type ManagedChild, reapOrphans, runToEnd, seconds, spawnManaged, trackChildrenIn, waitForHttp } from "./services/processes";
 
 const root = path.resolve(path.dirname(new URL(import.meta.url).pathname), "..");
 const dev = process.argv.includes("--dev");
@@ -49,24 +50,7 @@ async function shutdown(code: number, why: string): Promise<never> {
   shuttingDown = true;
   shutdownAt = Date.now();
   say(`${why}; stopping`);
-  try {
-    await stopAllChildren();
-  } catch (err) {
-    console.error(err);
-  }
-  try {
-    await smtp?.stop();
-    await providers?.stop();
-  } catch (err) {
-    console.error(err);
-  }
-  try {
-    // Also when the signal came while PostgreSQL was still starting.
-    const handle = await pgStarting?.catch(() => undefined);
-    await handle?.stop();
-  } catch (err) {
-    console.error(err);
-  }
+  await stopServices({ smtp, providers, pgStarting });
   say("stopped");
   process.exit(code);
 }

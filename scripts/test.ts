@@ -15,9 +15,10 @@ import { seedDemo } from "../db/seed";
 import { ensureDevCertificate } from "./services/dev-certificate";
 import { startFakeSmtp, type FakeSmtpHandle } from "./services/fake-smtp";
 import { startLocalProviders, type LocalProviders } from "./services/local-providers";
+import { stopServices } from "./services/stop-services";
 import { buildFingerprint, buildIsCurrent, forgetBuild, recordBuild } from "./services/next-build";
 import { ensurePostgres, freePort, portIsFree, recreateDatabase, type PostgresHandle } from "./services/postgres";
-import { reapOrphans, runToEnd, seconds, spawnManaged, stopAllChildren, trackChildrenIn, waitForHttp } from "./services/processes";
+import { reapOrphans, runToEnd, seconds, spawnManaged, trackChildrenIn, waitForHttp } from "./services/processes";
 
 const root = path.resolve(path.dirname(new URL(import.meta.url).pathname), "..");
 const TEST_DB = "eigenroom_test";
@@ -161,23 +162,7 @@ async function finish(code: number): Promise<never> {
   finishing = true;
   finishingAt = Date.now();
   const t = Date.now();
-  try {
-    await stopAllChildren();
-  } catch (err) {
-    console.error(err);
-  }
-  try {
-    await smtp?.stop();
-    await providers?.stop();
-  } catch (err) {
-    console.error(err);
-  }
-  try {
-    const handle = await pgStarting?.catch(() => undefined);
-    await handle?.stop();
-  } catch (err) {
-    console.error(err);
-  }
+  await stopServices({ smtp, providers, pgStarting });
   releaseLock();
   phases.push({ name: "stop services", ms: Date.now() - t, outcome: "passed" });
   printSummary(code);

@@ -2,36 +2,16 @@
 
 import { useRouter } from "next/navigation";
 import { useState, useTransition } from "react";
-import { toast } from "sonner";
 import { approveReportAction, postReportCommentAction } from "@/app/(app)/projects/[projectId]/reports/actions";
+import { ActionButton } from "@/components/ui/action-button";
 import { Button } from "@/components/ui/button";
 import { Field, Textarea } from "@/components/ui/field";
 
 export function ApproveForm({ projectId, revisionId, revision }: { projectId: string; revisionId: string; revision: number }) {
-  const router = useRouter();
-  const [pending, start] = useTransition();
-  const [error, setError] = useState<string>();
   return (
-    <div className="space-y-2">
-      <Button
-        disabled={pending}
-        onClick={() =>
-          start(async () => {
-            const r = await approveReportAction(projectId, revisionId, {});
-            if (!r.ok) return setError(r.message);
-            toast.success("Thank you: the recommendation is approved");
-            router.refresh();
-          })
-        }
-      >
-        {pending ? "Approving…" : `Approve the recommendation (revision ${revision})`}
-      </Button>
-      {error && (
-        <p role="alert" className="text-xs font-medium text-outside">
-          {error}
-        </p>
-      )}
-    </div>
+    <ActionButton pendingLabel="Approving…" run={() => approveReportAction(projectId, revisionId, {})} success={() => "Thank you: the recommendation is approved"}>
+      Approve the recommendation (revision {revision})
+    </ActionButton>
   );
 }
 

@@ -4,34 +4,19 @@ import { useRouter } from "next/navigation";
 import { useState, useTransition } from "react";
 import { toast } from "sonner";
 import { issueReportAction, reportSettingsAction, sendReportAction } from "@/app/(app)/rooms/[roomId]/report/actions";
+import { ActionButton } from "@/components/ui/action-button";
 import { Button } from "@/components/ui/button";
 import { Field, Input } from "@/components/ui/field";
 
 export function IssueButton({ roomId, revisionId }: { roomId: string; revisionId: string }) {
-  const router = useRouter();
-  const [pending, start] = useTransition();
-  const [error, setError] = useState<string>();
   return (
-    <div className="space-y-2">
-      <Button
-        disabled={pending}
-        onClick={() =>
-          start(async () => {
-            const r = await issueReportAction(roomId, revisionId);
-            if (!r.ok) return setError(r.message);
-            toast.success(`Issued and signed (render ${(r.data.renderMs / 1000).toFixed(1)} s, sign ${(r.data.signMs / 1000).toFixed(1)} s)`);
-            router.refresh();
-          })
-        }
-      >
-        {pending ? "Signing…" : "Issue and sign"}
-      </Button>
-      {error && (
-        <p role="alert" className="text-xs font-medium text-outside">
-          {error}
-        </p>
-      )}
-    </div>
+    <ActionButton
+      pendingLabel="Signing…"
+      run={() => issueReportAction(roomId, revisionId)}
+      success={(d) => `Issued and signed (render ${(d.renderMs / 1000).toFixed(1)} s, sign ${(d.signMs / 1000).toFixed(1)} s)`}
+    >
+      Issue and sign
+    </ActionButton>
   );
 }
 
