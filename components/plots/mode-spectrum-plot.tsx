@@ -7,6 +7,7 @@ import { HoverReadout } from "./hover-readout";
 import { Legend } from "./legend";
 import { Marker } from "./marker";
 import { PlotFrame } from "./plot-frame";
+import { MarkerLines } from "./marker-lines";
 import { SVG_ROOT_STYLE, TEXT } from "./svg-text";
 
 /** Props of {@link ModeSpectrumPlot}. */
@@ -68,14 +69,7 @@ export function ModeSpectrumPlot(props: ModeSpectrumPlotProps) {
                     </g>
                   );
                 })}
-                {g.markerLines.map((m) => (
-                  <g key={`${m.label}-${m.x}`}>
-                    <line x1={m.x} x2={m.x} y1={0} y2={g.area.height} stroke={INK.kiln} strokeWidth={1.25} strokeDasharray="6 3" />
-                    <text x={m.labelX} y={m.labelY} textAnchor={m.anchor} {...TEXT.tick} fill={INK.kiln}>
-                      {m.label}
-                    </text>
-                  </g>
-                ))}
+                <MarkerLines lines={g.markerLines} height={g.area.height} />
               </g>
               <Axis axis={g.xAxis} area={g.area} />
               <Axis axis={g.yAxis} area={g.area} />
