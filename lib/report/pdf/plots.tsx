@@ -14,6 +14,15 @@ export const PLOT_PT = 487;
 
 const font = { fontFamily: SANS[0], fontSize: 10.5, fill: C.soft } as const;
 
+/** A plot drawn at the report's plot width, scaled from the geometry's own pixel size. */
+function PlotSvg({ g, children }: { g: { width: number; height: number }; children: React.ReactNode }) {
+  return (
+    <Svg width={PLOT_PT} height={(PLOT_PT * g.height) / g.width} viewBox={`0 0 ${g.width} ${g.height}`}>
+      {children}
+    </Svg>
+  );
+}
+
 function Frame({ g, children }: { g: CartesianFrame; children: React.ReactNode }) {
   const { area, xAxis, yAxis, legend } = g;
   return (
@@ -75,9 +84,8 @@ function Frame({ g, children }: { g: CartesianFrame; children: React.ReactNode }
 
 /** A frequency-response plot (modal response, α curve) from lib/plots geometry. */
 export function ResponsePlot({ g }: { g: FrequencyResponseGeometry }) {
-  const h = (PLOT_PT * g.height) / g.width;
   return (
-    <Svg width={PLOT_PT} height={h} viewBox={`0 0 ${g.width} ${g.height}`}>
+    <PlotSvg g={g}>
       <Frame g={g}>
         {g.band ? (
           <G>
@@ -104,15 +112,14 @@ export function ResponsePlot({ g }: { g: FrequencyResponseGeometry }) {
           </G>
         ))}
       </Frame>
-    </Svg>
+    </PlotSvg>
   );
 }
 
 /** RT60 per band: bars for each scenario, the shaded target and verdict shapes. */
 export function BandBarsPlot({ g }: { g: BandBarsGeometry }) {
-  const h = (PLOT_PT * g.height) / g.width;
   return (
-    <Svg width={PLOT_PT} height={h} viewBox={`0 0 ${g.width} ${g.height}`}>
+    <PlotSvg g={g}>
       <Frame g={g}>
         {g.targetArea ? <Path d={g.targetArea} fill={INK.kiln} fillOpacity={0.16} stroke="none" /> : null}
         {g.targetLine ? <Path d={g.targetLine} stroke={C.accent} strokeWidth={1} strokeDasharray="4 3" fill="none" /> : null}
@@ -129,15 +136,14 @@ export function BandBarsPlot({ g }: { g: BandBarsGeometry }) {
           <Path key={`v${i}`} d={mk.path} transform={`translate(${mk.x}, ${mk.y})`} fill={mk.shape === "cross" ? "none" : mk.colour} stroke={mk.colour} strokeWidth={1.2} />
         ))}
       </Frame>
-    </Svg>
+    </PlotSvg>
   );
 }
 
 /** Mode spectrum: three lanes of stems (axial, tangential, oblique). */
 export function ModeSpectrumPlot({ g }: { g: ModeSpectrumGeometry }) {
-  const h = (PLOT_PT * g.height) / g.width;
   return (
-    <Svg width={PLOT_PT} height={h} viewBox={`0 0 ${g.width} ${g.height}`}>
+    <PlotSvg g={g}>
       <G>
         <G transform={`translate(${g.area.x}, ${g.area.y})`}>
           {g.xAxis.ticks.map((t, i) => (
@@ -185,7 +191,7 @@ export function ModeSpectrumPlot({ g }: { g: ModeSpectrumGeometry }) {
           </Text>
         </G>
       </G>
-    </Svg>
+    </PlotSvg>
   );
 }
 
