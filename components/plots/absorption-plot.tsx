@@ -29,11 +29,9 @@ export interface AbsorptionPlotProps {
  */
 export function AbsorptionPlot(props: AbsorptionPlotProps) {
   const id = useId();
-  const probe = absorptionGeometry(props, { width: 600 });
   return (
-    <PlotFrame title={props.title} units={props.units} caption={props.caption} table={probe.table} fallbackWidth={props.fallbackWidth} className={props.className}>
-      {(width) => {
-        const g = absorptionGeometry(props, { width, areaHeight: props.areaHeight });
+    <PlotFrame title={props.title} units={props.units} caption={props.caption} geometry={(width) => absorptionGeometry(props, { width, areaHeight: props.areaHeight })} fallbackWidth={props.fallbackWidth} className={props.className}>
+      {(g) => {
         const clip = svgId(id, "clip");
         const one = g.yAxis.ticks.find((t) => t.value === 1);
         return (

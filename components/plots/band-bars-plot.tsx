@@ -35,11 +35,9 @@ export interface BandBarsPlotProps {
  */
 export function BandBarsPlot(props: BandBarsPlotProps) {
   const unit = props.unit ?? "s";
-  const probe = bandBarsGeometry(props, { width: 600 });
   return (
-    <PlotFrame title={props.title} units={props.units} caption={props.caption} table={probe.table} fallbackWidth={props.fallbackWidth} className={props.className}>
-      {(width) => {
-        const g = bandBarsGeometry(props, { width, areaHeight: props.areaHeight });
+    <PlotFrame title={props.title} units={props.units} caption={props.caption} geometry={(width) => bandBarsGeometry(props, { width, areaHeight: props.areaHeight })} fallbackWidth={props.fallbackWidth} className={props.className}>
+      {(g) => {
         return (
           <>
             <svg data-plot-root width={g.width} height={g.height} viewBox={`0 0 ${g.width} ${g.height}`} role="img" aria-label={`${props.title}. ${g.summary}`} style={SVG_ROOT_STYLE} className="block h-auto max-w-full">

@@ -35,11 +35,9 @@ export interface FrequencyResponsePlotProps {
 /** Several curves of level (dB) over log frequency, with an optional shaded band, marker lines and a read-out. */
 export function FrequencyResponsePlot(props: FrequencyResponsePlotProps) {
   const id = useId();
-  const probe = frequencyResponseGeometry(props, { width: 600 });
   return (
-    <PlotFrame title={props.title} units={props.units} caption={props.caption} table={probe.table} fallbackWidth={props.fallbackWidth} className={props.className}>
-      {(width) => {
-        const g = frequencyResponseGeometry(props, { width, areaHeight: props.areaHeight });
+    <PlotFrame title={props.title} units={props.units} caption={props.caption} geometry={(width) => frequencyResponseGeometry(props, { width, areaHeight: props.areaHeight })} fallbackWidth={props.fallbackWidth} className={props.className}>
+      {(g) => {
         const clip = svgId(id, "clip");
         return (
           <>

@@ -42,11 +42,9 @@ export function Heatmap(props: HeatmapProps) {
   const id = useId();
   const [cell, setCell] = useState<{ ix: number; iy: number } | null>(null);
   const input = { ...props, values: props.values };
-  const probe = heatmapGeometry(input, { width: 600 });
   return (
-    <PlotFrame title={props.title} units={props.units} caption={props.caption} table={probe.table} fallbackWidth={props.fallbackWidth} className={props.className}>
-      {(width) => {
-        const g = heatmapGeometry(input, { width, maxAreaHeight: props.maxAreaHeight });
+    <PlotFrame title={props.title} units={props.units} caption={props.caption} geometry={(width) => heatmapGeometry(input, { width, maxAreaHeight: props.maxAreaHeight })} fallbackWidth={props.fallbackWidth} className={props.className}>
+      {(g) => {
         const grad = svgId(id, "ramp");
         const active = cell && cell.ix < g.gridX && cell.iy < g.gridY ? g.cells[cell.ix * g.gridY + cell.iy] : undefined;
         const readout: Readout | null = active

@@ -34,11 +34,9 @@ const indices = (m: PlotMode) => `(${m.nx},${m.ny},${m.nz})`;
  * listing the modes on each stem. Modes that coincide on screen share a stem and show their count.
  */
 export function ModeSpectrumPlot(props: ModeSpectrumPlotProps) {
-  const probe = modeSpectrumGeometry(props, { width: 600 });
   return (
-    <PlotFrame title={props.title} units={props.units} caption={props.caption} table={probe.table} fallbackWidth={props.fallbackWidth} className={props.className}>
-      {(width) => {
-        const g = modeSpectrumGeometry(props, { width });
+    <PlotFrame title={props.title} units={props.units} caption={props.caption} geometry={(width) => modeSpectrumGeometry(props, { width })} fallbackWidth={props.fallbackWidth} className={props.className}>
+      {(g) => {
         return (
           <>
             <svg data-plot-root width={g.width} height={g.height} viewBox={`0 0 ${g.width} ${g.height}`} role="img" aria-label={`${props.title}. ${g.summary}`} style={SVG_ROOT_STYLE} className="block h-auto max-w-full">

@@ -8,16 +8,16 @@ import { useElementWidth } from "./use-element-width";
 import { DataTable } from "./data-table";
 
 /** Props of {@link PlotFrame}. */
-export interface PlotFrameProps {
+export interface PlotFrameProps<G extends { table: PlotTable }> {
   title: string;
   /** unit note beside the title, e.g. "dB, relative to the mean" */
   units?: string;
   /** figure caption below the plot */
   caption?: ReactNode;
-  /** the data behind the plot: screen-reader table and CSV export */
-  table: PlotTable;
-  /** draws the plot for a measured width, px */
-  children: (widthPx: number) => ReactNode;
+  /** the plot's geometry at a measured width, px; its `table` feeds the screen-reader table and CSV */
+  geometry: (widthPx: number) => G;
+  /** draws the plot from its geometry */
+  children: (geometry: G) => ReactNode;
   /** width before measuring (server rendering), px */
   fallbackWidth?: number;
   /** hide the download buttons */
@@ -30,8 +30,11 @@ export interface PlotFrameProps {
  * with a fallback width for server rendering), caption, and a visually hidden data table for screen readers.
  * The drawing's <svg> carries role="img" and an aria-label with the summary.
  */
-export function PlotFrame({ title, units, caption, table, children, fallbackWidth, noExport, className }: PlotFrameProps) {
+export function PlotFrame<G extends { table: PlotTable }>({ title, units, caption, geometry, children, fallbackWidth, noExport, className }: PlotFrameProps<G>) {
   const [ref, width] = useElementWidth<HTMLDivElement>(fallbackWidth);
+  // One geometry per render: the drawing and its data table come from the same computation.
+  const g = geometry(width);
+  const table = g.table;
   const getSvg = useCallback(() => ref.current?.querySelector<SVGSVGElement>("svg[data-plot-root]") ?? null, [ref]);
   return (
     <figure className={cn("rounded-[10px] border border-paper-line bg-paper-raised p-4 break-inside-avoid print:border-0 print:p-0", className)}>
@@ -43,7 +46,7 @@ export function PlotFrame({ title, units, caption, table, children, fallbackWidt
         {!noExport && <PlotExportMenu title={title} getSvg={getSvg} table={table} />}
       </div>
       <div ref={ref} className="relative w-full">
-        {children(width)}
+        {children(g)}
       </div>
       {caption && <figcaption className="mt-2 max-w-prose text-xs leading-relaxed text-ink-soft">{caption}</figcaption>}
       <DataTable title={title} table={table} />
